@@ -5,8 +5,8 @@ package org.halyard.gridding;
  * halves cleanly down to a few nodes, then cropped back.
  *
  * <p><b>Algorithm:</b> for the largest number of halvings {@code L} whose padded lattice
- * {@code (a 2^L + 1) x (b 2^L + 1)} covers the grid with at most {@value #MAX_EXTRA_AREA} extra area
- * (and at least 3 nodes a side at the coarsest level), pad evenly on both sides. A lattice whose sides share
+ * {@code (a 2^L + 1) x (b 2^L + 1)} covers the grid with at most {@value #MAX_EXTRA_AREA} extra area,
+ * or 16 extra nodes per grid side node for small grids (and at least 3 nodes a side at the coarsest level), pad evenly on both sides. A lattice whose sides share
  * few factors cannot coarsen and the relaxation then needs many more sweeps (STACK.md, Gridding).
  *
  * @param columns    internal columns at the finest level, at least the grid's
@@ -33,7 +33,9 @@ public record CoarseningLayout(int columns, int rows, int padWest, int padNorth,
                 continue;
             }
             long nc = a * step + 1, nr = b * step + 1;
-            if (nc * (double) nr <= area * (1 + MAX_EXTRA_AREA)) {
+            // Small grids may pad more: a few extra rows cost less than hundreds of extra sweeps.
+            double allowed = Math.max(area * MAX_EXTRA_AREA, 16.0 * (columns + rows));
+            if (nc * (double) nr <= area + allowed) {
                 return new CoarseningLayout((int) nc, (int) nr, (int) (nc - columns) / 2, (int) (nr - rows) / 2, l);
             }
         }

@@ -24,7 +24,7 @@ public record GriddingOptions(double tension, double convergenceLimit, int maxSw
     /** Default convergence limit as a fraction of the data range. */
     public static final double DEFAULT_RELATIVE_LIMIT = 1e-5;
     /** Default cap on sweeps per level. */
-    public static final int DEFAULT_MAX_SWEEPS = 400;
+    public static final int DEFAULT_MAX_SWEEPS = 500;
 
     public GriddingOptions {
         if (!(tension >= 0 && tension < 1)) {

@@ -257,7 +257,7 @@ public final class SplineGridder {
             }
             level.constrain(li, lj, v);
             double share = level.nx * (double) level.ny / total;
-            double first = Double.NaN;
+            double first = Double.NaN, shown = 0;
             boolean met = false;
             for (int k = 0; k < options.maxSweeps(); k++) {
                 p.checkCanceled();
@@ -272,7 +272,11 @@ public final class SplineGridder {
                 }
                 double f = Math.max((k + 1.0) / options.maxSweeps(),
                         Math.log(first / change) / Math.log(Math.max(first / limit, 1.0000001)));
-                p.report(100 * (done + share * Math.min(1, Math.max(0, f))));
+                shown = Math.max(shown, Math.min(1, f));
+                p.report(100 * (done + share * shown));
+                if (System.getenv("HALYARD_TRACE") != null && (k % 20 == 0)) {
+                    System.err.printf("level %d (%d x %d) sweep %d change %.3g limit %.3g%n", l, level.nx, level.ny, k, change, limit);
+                }
             }
             converged &= met;
             done += share;

@@ -10,8 +10,8 @@ import java.util.stream.IntStream;
  * (Smith and Wessel 1990, eq. 5; Briggs 1974, eq. 4 for T = 0) uses the 13-node biharmonic stencil
  * {@code 20 u0 - 8 (sides) + 2 (diagonals) + (two away)} and the 5-node Laplacian. Each free node moves
  * towards the value that satisfies its equation, by the factor {@link #OMEGA}. A node holding a sample
- * (offset {@code dx, dy} in lattice units) is set instead so that the second-order Taylor expansion of the
- * surface about the node, with derivatives from its neighbours, passes through the sample. Two ghost rows
+ * (offset {@code dx, dy} in lattice units) is set instead so that the first-order Taylor expansion of the
+ * surface about the node, with central differences from its neighbours, passes through the sample. Two ghost rows
  * and columns outside each edge carry the free-edge conditions of Smith and Wessel (1990, eqs. 6-8): zero
  * curvature across the edge, zero normal derivative of {@code (1 - T) D2 u - T u}, and zero twist at the
  * corners, each written here as central differences.
@@ -163,17 +163,18 @@ final class TensionSplineRelaxation {
         return maxChange;
     }
 
-    /** The node value whose second-order Taylor expansion reaches the sample held by constraint {@code c}. */
+    /**
+     * The node value whose first-order Taylor expansion, with central differences from the neighbours,
+     * reaches the sample held by constraint {@code c}. First order on purpose: the neighbours' weights sum
+     * to {@code |dx| + |dy| <= 1}, so coupled constraints never amplify each other during the sweeps; solving
+     * the second-order expansion for the node divides by {@code 1 - dx^2 - dy^2} and diverged on dense data.
+     */
     private double taylor(int k, int c) {
         double dx = cdx[c], dy = cdy[c];
         if (dx == 0 && dy == 0) {
             return cv[c];
         }
-        double e = u[k + 1], wv = u[k - 1], s = u[k + w], n = u[k - w];
-        double twist = (u[k + w + 1] - u[k + w - 1] - u[k - w + 1] + u[k - w - 1]) / 4;
-        double num = cv[c] - dx * (e - wv) / 2 - dy * (s - n) / 2
-                - 0.5 * dx * dx * (e + wv) - 0.5 * dy * dy * (s + n) - dx * dy * twist;
-        return num / (1 - dx * dx - dy * dy);
+        return cv[c] - dx * (u[k + 1] - u[k - 1]) / 2 - dy * (u[k + w] - u[k - w]) / 2;
     }
 
     /** Fills the two ghost rows and columns from the free-edge conditions. */
