@@ -274,9 +274,6 @@ public final class SplineGridder {
                         Math.log(first / change) / Math.log(Math.max(first / limit, 1.0000001)));
                 shown = Math.max(shown, Math.min(1, f));
                 p.report(100 * (done + share * shown));
-                if (System.getenv("HALYARD_TRACE") != null && (k % 20 == 0)) {
-                    System.err.printf("level %d (%d x %d) sweep %d change %.3g limit %.3g%n", l, level.nx, level.ny, k, change, limit);
-                }
             }
             converged &= met;
             done += share;
