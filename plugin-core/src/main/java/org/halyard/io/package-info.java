@@ -1,7 +1,6 @@
 /**
- * File formats: GeoTIFF grids, survey CSV, IAGA-2002 base-station files, GeoPackage vector layers.
- *
- * <p>GeoTools and GeoPackage library types live here (and in {@code org.halyard.process}) only; the rest of
- * Halyard sees {@link org.halyard.grid.Grid}, plain arrays, JTS geometries and the records of this package.
+ * File formats at the edge of Halyard: GeoTIFF grids (through GeoTools), delimited survey tables,
+ * IAGA-2002 base-station files and GeoPackage layers. GeoTools and GeoPackage types stay in this package
+ * and in {@code org.halyard.process}; the kernels never see them.
  */
 package org.halyard.io;
