@@ -21,7 +21,7 @@ import picocli.CommandLine.Parameters;
 /**
  * {@code halyard grid LINES.csv OUT.tif --x COL --y COL --value COL --cell M [--crs EPSG:n]}: samples of a
  * delimited table to a float32 GeoTIFF by splines in tension ({@link SplineGridder}). Rows with an empty or
- * NaN x, y or value are skipped and counted on stderr; progress goes to stderr.
+ * NaN x, y or value are skipped and counted on stderr; progress goes to stderr when it is a terminal.
  */
 @Command(name = "grid", description = {
         "Grid line samples (x, y, value columns of a CSV) to a float32 GeoTIFF with splines in tension.",
@@ -90,10 +90,11 @@ final class GridCommand implements Callable<Integer> {
         GriddingOptions options = options();
         Columns t = read();
         GridGeometry g = SplineGridder.geometryFor(t.x, t.y, cell, crs);
-        StderrProgress progress = new StderrProgress("grid " + out.getFileName());
+        TerminalProgress progress = new TerminalProgress("grid " + out.getFileName());
         GriddingResult r = t.gx == null
                 ? SplineGridder.grid(t.x, t.y, t.v, g, options, progress)
                 : SplineGridder.grid(t.x, t.y, t.v, new GradientSamples(t.x, t.y, t.gx, t.gy), g, options, progress);
+        progress.done();
         try {
             crsReady.join();
         } catch (CompletionException e) {
