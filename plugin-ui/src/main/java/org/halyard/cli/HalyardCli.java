@@ -18,6 +18,7 @@ import picocli.CommandLine.Option;
         subcommands = {
                 ProcessesCommand.class,
                 SimulateCommand.class,
+                DetectabilityCommand.class,
         })
 public final class HalyardCli implements Callable<Integer> {
 
