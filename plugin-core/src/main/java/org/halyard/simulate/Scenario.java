@@ -156,6 +156,9 @@ public record Scenario(String name, String crs, long seed, String start, double[
      * @throws UncheckedIOException     when the file cannot be read
      */
     public static Scenario read(Path file) {
+        if (!Files.isRegularFile(file)) {
+            throw new IllegalArgumentException(file + ": scenario file does not exist");
+        }
         Scenario s;
         try {
             s = mapper().readValue(Files.readString(file), Scenario.class);

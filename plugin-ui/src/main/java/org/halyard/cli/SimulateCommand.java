@@ -22,8 +22,9 @@ final class SimulateCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Scenario s = Scenario.read(scenario);
-        // TerminalProgress (on main, not yet committed) will draw a bar here once it lands
-        SurveySimulator.Summary r = SurveySimulator.run(s, out, null);
+        TerminalProgress bar = new TerminalProgress("simulate");
+        SurveySimulator.Summary r = SurveySimulator.run(s, out, bar);
+        bar.done();
         System.out.printf(java.util.Locale.ROOT, "simulated %d samples on %d lines (%.1f min), %d objects%n",
                 r.samples(), r.lines(), r.durationMs() / 60000.0, r.objects());
         System.out.println("wrote " + out.resolve(SurveySimulator.RECIPE) + "; process it with: halyard run "
