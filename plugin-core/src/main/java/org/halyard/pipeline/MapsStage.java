@@ -22,6 +22,9 @@ final class MapsStage implements Stage {
 
     @Override
     public void run(RunContext ctx, Progress p) {
+        if (ctx.totalField == null) {
+            throw new IllegalStateException("no total-field grid to filter");
+        }
         FilterSettings settings = FilterSettings.defaults().withField(ctx.field);
         FilterBank bank = new FilterBank(ctx.totalField, settings);
         Path grids = ctx.work().resolve("grids");
