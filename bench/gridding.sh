@@ -18,14 +18,16 @@ export -f halyard_jar; export root
 measure() {  # label, command...
   local label="$1"; shift
   /usr/bin/time -v "$@" 2>"$work/time.txt" >/dev/null || { cat "$work/time.txt" >&2; exit 1; }
-  local wall rss
+  local wall rss cpu
   wall=$(grep 'Elapsed (wall clock)' "$work/time.txt" | awk '{print $NF}')
   rss=$(grep 'Maximum resident set size' "$work/time.txt" | awk '{print $NF}')
-  printf '%-34s wall %8s  peak %6d MB\n' "$label" "$wall" $((rss / 1024))
+  cpu=$(awk -F': ' '/User time|System time/ {s += $2} END {printf "%.1f", s}' "$work/time.txt")
+  printf '%-30s wall %8s  cpu %7s s  peak %6d MB\n' "$label" "$wall" "$cpu" $((rss / 1024))
 }
 
 run_case() {  # name width height samples dipoles
   local name="$1" w="$2" h="$3" n="$4" nd="$5"
+  cd "$work"  # GMT leaves gmt.history in the working directory
   local csv="$work/$name.csv"
   [ -f "$csv.dipoles.npy" ] || "$py" "$root/bench/gridding_data.py" "$csv" "$w" "$h" "$n" "$nd"
   local rows; rows=$(($(wc -l <"$csv") - 1))
@@ -46,7 +48,7 @@ run_case() {  # name width height samples dipoles
   printf 'accuracy gmt blockmedian+surf:'; "$py" "$root/bench/gridding_accuracy.py" "$csv" "$work/$name-gmtbm.xyz" 0.5
 }
 
-echo "machine: $(nproc) cores, $(free -g | awk '/Mem:/ {print $2}') GB; $(gmt --version | sed 's/^/GMT /'); $(java -version 2>&1 | head -1)"
+echo "machine: $(nproc) cores, load average $(cut -d' ' -f1-3 /proc/loadavg), $(free -g | awk '/Mem:/ {print $2}') GB; $(gmt --version | sed 's/^/GMT /'); $(java -version 2>&1 | head -1)"
 case "$which" in
   small) run_case small 252.5 285.5 128000 40 ;;
   large) run_case large 2000 2000 10000000 60 ;;

@@ -58,7 +58,7 @@ final class GridCommand implements Callable<Integer> {
             description = "Blanking distance from data, metres; 'none' keeps every cell. Default: automatic.")
     String blank;
 
-    @Option(names = "--merge", paramLabel = "median|mean", defaultValue = "median",
+    @Option(names = "--merge", paramLabel = "mean|median", defaultValue = "mean",
             description = "How samples sharing a cell are merged. Default: ${DEFAULT-VALUE}.")
     String merge;
 
