@@ -1,0 +1,23 @@
+package org.halyard.sheet;
+
+/**
+ * Everything a sheet series is made from.
+ *
+ * @param title    job title for the title blocks
+ * @param crsCode  the projected CRS of every layer, e.g. {@code EPSG:32631}
+ * @param content  map layers
+ * @param coverage what the series must cover
+ * @param options  paper, scale, overlap, resolution, graticule
+ */
+public record SheetRequest(SheetTitle title, String crsCode, MapContent content, Coverage coverage,
+                           SheetOptions options) {
+
+    public SheetRequest {
+        if (title == null || content == null || coverage == null || options == null) {
+            throw new IllegalArgumentException("sheet request needs a title, content, coverage and options");
+        }
+        if (crsCode == null || crsCode.isBlank()) {
+            throw new IllegalArgumentException("sheet request needs the CRS code of its layers, e.g. EPSG:32631");
+        }
+    }
+}
