@@ -14,7 +14,7 @@ import org.geotools.referencing.CRS;
  *
  * <p><b>Algorithm:</b> the projection's own conversion from its base geographic CRS (GeoTools
  * referencing, EPSG database). Grid convergence is found numerically: the point is moved 1e-4 degree
- * north along its meridian and the direction of that step in grid coordinates gives the angle between
+ * north and south along its meridian and the direction of that chord in grid coordinates gives the angle between
  * true north and grid north.
  *
  * <p><b>Accuracy:</b> convergence to about 1e-6 degree (the finite step; checked against PROJ's
@@ -125,8 +125,10 @@ public final class ProjectedCrs {
     public double convergenceDeg(double x, double y) {
         double[] ll = toLonLat(x, y);
         double[] up = fromLonLat(ll[0], ll[1] + MERIDIAN_STEP_DEG);
-        double dx = up[0] - x;
-        double dy = up[1] - y;
+        double[] down = fromLonLat(ll[0], ll[1] - MERIDIAN_STEP_DEG);
+        // A central difference, so the meridian's curvature in the grid cancels to first order.
+        double dx = up[0] - down[0];
+        double dy = up[1] - down[1];
         // True north points dx, dy in the grid; grid north is clockwise from it by the returned angle.
         return Math.toDegrees(Math.atan2(-dx, dy));
     }

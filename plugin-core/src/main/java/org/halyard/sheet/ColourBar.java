@@ -16,7 +16,7 @@ record ColourBar(RasterLayer layer) implements PanelBlock {
 
     @Override
     public String heading() {
-        return (layer.name() + " (" + layer.unit() + ")").toUpperCase(Locale.ROOT);
+        return layer.name().toUpperCase(Locale.ROOT) + " (" + layer.unit() + ")";
     }
 
     @Override
@@ -28,7 +28,7 @@ record ColourBar(RasterLayer layer) implements PanelBlock {
     public void drawBody(SheetCanvas c, PageRect body) {
         ColourScale s = layer.colours();
         float x0 = body.x() + 8;
-        float w = body.width() - 16;
+        float w = body.width() - 8 - SheetCanvas.textWidth("0000 " + layer.unit(), LABEL_PT, false) / 2;
         float yBar = body.top() - BAR_PT;
         c.begin("ColourBar");
         float cw = w / CELLS;
@@ -54,6 +54,7 @@ record ColourBar(RasterLayer layer) implements PanelBlock {
     /** A value with as many decimals as the bar's range needs. */
     static String format(double v, double range) {
         int decimals = range >= 50 ? 0 : range >= 5 ? 1 : range >= 0.5 ? 2 : 3;
-        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
+        return s.matches("-0\\.?0*") ? s.substring(1) : s;
     }
 }

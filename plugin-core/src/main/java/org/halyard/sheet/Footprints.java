@@ -30,9 +30,8 @@ final class Footprints {
             c.stroke(LINE_RGB, s.number() == highlight ? 1.2f : 0.6f);
             c.strokeRect(r);
             if (labelPt > 0) {
-                c.fill(LINE_RGB);
-                c.text(Integer.toString(s.number()), r.x() + r.width() / 2, r.y() + r.height() / 2 - labelPt / 3,
-                        labelPt, true, 0.5, 0);
+                c.haloText(Integer.toString(s.number()), r.x() + r.width() / 2, r.y() + r.height() / 2 - labelPt / 3,
+                        labelPt, true, 0.5, 0, LINE_RGB);
             }
         }
         c.end();

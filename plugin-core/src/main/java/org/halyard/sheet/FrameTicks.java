@@ -52,12 +52,15 @@ public final class FrameTicks {
     /** Draws grid crosses inside the frame (call under a clip to the frame). */
     static void drawCrosses(SheetCanvas c, MapWindow w) {
         double step = interval(w);
-        c.stroke(INK, 0.35f);
-        for (double x : values(w.west(), w.east(), step)) {
-            for (double y : values(w.south(), w.north(), step)) {
-                float px = w.pageX(x), py = w.pageY(y);
-                c.line(px - CROSS_PT, py, px + CROSS_PT, py);
-                c.line(px, py - CROSS_PT, px, py + CROSS_PT);
+        // A white casing under the dark cross keeps it legible over dark and light rasters alike.
+        for (int pass = 0; pass < 2; pass++) {
+            c.stroke(pass == 0 ? 0xFFFFFF : INK, pass == 0 ? 1.3f : 0.4f);
+            for (double x : values(w.west(), w.east(), step)) {
+                for (double y : values(w.south(), w.north(), step)) {
+                    float px = w.pageX(x), py = w.pageY(y);
+                    c.line(px - CROSS_PT, py, px + CROSS_PT, py);
+                    c.line(px, py - CROSS_PT, px, py + CROSS_PT);
+                }
             }
         }
     }

@@ -85,11 +85,15 @@ public final class Graticule {
             if (parallel && xs[i] <= f.x() && xs[i + 1] > f.x()) {
                 double t = (f.x() - xs[i]) / (xs[i + 1] - xs[i]);
                 double y = ys[i] + t * (ys[i + 1] - ys[i]);
-                c.text(label, f.x() + 2, y + 1.5, LABEL_PT, false);
+                c.begin("GraticuleLabel");
+                c.haloText(label, f.x() + 2, y + 1.5, LABEL_PT, false, 0, 0, INK);
+                c.end();
             } else if (!parallel && ys[i] <= f.y() && ys[i + 1] > f.y()) {
                 double t = (f.y() - ys[i]) / (ys[i + 1] - ys[i]);
                 double x = xs[i] + t * (xs[i + 1] - xs[i]);
-                c.text(label, x - 1.5, f.y() + 3, LABEL_PT, false, 0, 90);
+                c.begin("GraticuleLabel");
+                c.haloText(label, x - 1.5, f.y() + 3, LABEL_PT, false, 0, 90, INK);
+                c.end();
             }
         }
     }

@@ -65,8 +65,10 @@ final class MapBody {
             float px = w.pageX(t.x()), py = w.pageY(t.y());
             if (f.contains(px, py)) {
                 TargetSymbols.draw(c, t.targetClass(), px, py);
-                c.fill(0x111111);
-                c.text(t.id(), px + TargetSymbols.RADIUS + 1.2, py + 1.2, TARGET_LABEL_PT, false);
+                c.begin("TargetLabel");
+                c.haloText(t.id(), px + TargetSymbols.RADIUS + 1.5, py + 1.2, TARGET_LABEL_PT, false, 0, 0,
+                        0x111111);
+                c.end();
             }
         }
         c.end();

@@ -55,7 +55,7 @@ record NorthArrow(double convergenceDeg, double centreX, double centreY) impleme
         c.stroke(0x111111, 0.5f);
         c.polyline(new double[] {cx, cx + 4, cx - 4}, new double[] {base + len, base, base}, true);
         c.fill(0x111111);
-        c.text("GN", cx, base + len + 2, 6f, true, 0.5, 0);
+        c.text("GN", cx + 3, base + len - 4, 6f, true, 0, 0);
         double drawn = Math.abs(convergenceDeg) < MIN_DRAWN_DEG
                 ? Math.copySign(MIN_DRAWN_DEG, convergenceDeg) : convergenceDeg;
         double a = Math.toRadians(drawn);
@@ -63,7 +63,7 @@ record NorthArrow(double convergenceDeg, double centreX, double centreY) impleme
         c.stroke(0x0E6E6E, 0.7f);
         c.line(cx, base, tx, ty);
         c.fill(0x0E6E6E);
-        c.text("TN", tx - Math.signum(drawn) * 6, ty + 2, 6f, true, 0.5, 0);
+        c.text("TN", tx - 3 * Math.signum(drawn), ty - 4, 6f, true, drawn >= 0 ? 1 : 0, 0);
         c.end();
         c.fill(0x111111);
         PageRect text = new PageRect(body.x() + DIAGRAM + 6, body.y(), body.width() - DIAGRAM - 6, body.height());

@@ -28,7 +28,7 @@ record SeriesPlan(ProjectedCrs crs, SheetLayout layout, SheetLayout indexLayout,
         SheetLayout layout = SheetLayout.plan(r.options().format(), SheetBlocks.of(r, crs, "SHEET 1 OF 1",
                 probe, new KeyMap(List.of(dummy), 1, List.of())));
         SheetLayout indexLayout = SheetLayout.plan(r.options().format(),
-                SheetBlocks.of(r, crs, "INDEX", probe, null));
+                SheetBlocks.of(r.withoutRasters(), crs, "INDEX", probe, null));
         PageRect f = layout.frame();
         int scale = r.options().scaleDenominator();
         List<SheetFootprint> fps;

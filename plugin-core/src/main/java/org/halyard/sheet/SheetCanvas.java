@@ -191,6 +191,28 @@ public final class SheetCanvas implements AutoCloseable {
         });
     }
 
+    /**
+     * Draws text on a white backing box, for labels over a raster; then restores the fill colour to
+     * {@code rgb}. Arguments as {@link #text(String, double, double, float, boolean, double, double)}.
+     */
+    public void haloText(String text, double x, double y, float size, boolean bold, double align, double angle,
+                         int rgb) {
+        float w = textWidth(printable(text), size, bold);
+        double a = Math.toRadians(angle), cos = Math.cos(a), sin = Math.sin(a);
+        double pad = size * 0.18;
+        double u0 = -align * w - pad, u1 = (1 - align) * w + pad, v0 = -size * 0.25, v1 = size * 0.85;
+        double[] us = {u0, u1, u1, u0}, vs = {v0, v0, v1, v1};
+        double[] xs = new double[4], ys = new double[4];
+        for (int i = 0; i < 4; i++) {
+            xs[i] = x + us[i] * cos - vs[i] * sin;
+            ys[i] = y + us[i] * sin + vs[i] * cos;
+        }
+        fill(0xFFFFFF);
+        fillPolygon(xs, ys);
+        fill(rgb);
+        text(text, x, y, size, bold, align, angle);
+    }
+
     /** Left-aligned, unrotated text. */
     public void text(String text, double x, double y, float size, boolean bold) {
         text(text, x, y, size, bold, 0, 0);

@@ -20,4 +20,10 @@ public record SheetRequest(SheetTitle title, String crsCode, MapContent content,
             throw new IllegalArgumentException("sheet request needs the CRS code of its layers, e.g. EPSG:32631");
         }
     }
+
+    /** The same request without its raster layers: the index sheet shows the sheet layout, not the data. */
+    SheetRequest withoutRasters() {
+        return new SheetRequest(title, crsCode, new MapContent(java.util.List.of(), content.vectors(),
+                content.targets()), coverage, options);
+    }
 }

@@ -59,7 +59,8 @@ public final class SheetSeries {
         return new SheetSet(index, files, plan.footprints(), plan.scale());
     }
 
-    private static void writeIndex(SheetRequest request, SeriesPlan plan, Path file) {
+    private static void writeIndex(SheetRequest full, SeriesPlan plan, Path file) {
+        SheetRequest request = full.withoutRasters();
         double[] e = Footprints.extent(plan.footprints());
         double pad = 0.03 * Math.max(e[2] - e[0], e[3] - e[1]);
         SheetLayout layout = plan.indexLayout();

@@ -51,7 +51,9 @@ class GraticuleTest {
         String out = ExternalTools.run(List.of("sh", "-c", "proj -I -f %.10f +proj=utm +zone=31 +datum=WGS84 <<'EOF'\n"
                 + in + "EOF"), null).orFail();
         String[] lines = out.trim().split("\n");
-        String labels = String.join(" ", rec.words("Graticule").stream().map(PdfRecorder.Glyph::text).toList());
+        // Meridian labels are rotated, so their glyphs come as separate words: compare without spaces.
+        String labels = String.join(" ", rec.words("GraticuleLabel").stream().map(PdfRecorder.Glyph::text).toList())
+                .replace(" ", "");
         int line = 0;
         int checked = 0;
         for (int k : order) {

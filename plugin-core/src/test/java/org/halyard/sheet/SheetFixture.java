@@ -7,7 +7,7 @@ import org.halyard.grid.GridGeometry;
 import org.halyard.model.Dipole;
 import org.halyard.model.FieldDirection;
 import org.halyard.render.ColourRamp;
-import org.halyard.render.LinearStretch;
+import org.halyard.render.HistogramStretch;
 
 /**
  * A small fictional survey ("Kelderbank cable approach", UTM zone 31N) for the sheet tests: a total-field
@@ -36,7 +36,7 @@ final class SheetFixture {
     static MapContent content() {
         Grid tf = totalField();
         RasterLayer raster = new RasterLayer("Total field", tf, "nT",
-                RenderColours.of(ColourRamp.named("shoal"), LinearStretch.minMax(tf)));
+                RenderColours.of(ColourRamp.named("shoal"), HistogramStretch.of(tf)));
         VectorLayer route = new VectorLayer("Planned cable route", LineStyle.dashed(0x111111, 1.2f, 6, 3),
                 List.of(route()));
         List<TargetMark> marks = new ArrayList<>();

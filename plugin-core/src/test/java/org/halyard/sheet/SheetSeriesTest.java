@@ -121,14 +121,30 @@ class SheetSeriesTest {
             assertThat(tickX.get(0) + (east[i] - east[0]) * slope).isCloseTo(tickX.get(i), within(0.05));
             assertThat(east[i] % 50).as("ticks on whole multiples of the 50 m interval").isEqualTo(0);
         }
-        // The target T001 (input position SheetFixture.SOURCES[0]) read back through the tick labels.
-        List<PdfRecorder.Vertex> ring = rec.in("Targets");
-        int firstPath = ring.get(0).path();
-        List<PdfRecorder.Vertex> t1 = ring.stream().filter(p -> p.path() == firstPath).toList();
-        double cx = (t1.stream().mapToDouble(PdfRecorder.Vertex::x).max().orElseThrow()
-                + t1.stream().mapToDouble(PdfRecorder.Vertex::x).min().orElseThrow()) / 2;
-        double easting = east[0] + (cx - tickX.get(0)) / slope;
-        assertThat(easting).isCloseTo(SheetFixture.SOURCES[0][0], within(0.05));
+        // Every target ring read back through the tick labels lands on its input position (SheetFixture).
+        List<PdfRecorder.Vertex> marks = rec.in("Targets");
+        List<PdfRecorder.Glyph> ids = rec.words("TargetLabel");
+        int found = 0;
+        for (PdfRecorder.Glyph id : ids) {
+            int k = Integer.parseInt(id.text().substring(1)) - 1;
+            // The symbol is the path whose centre is nearest left of the label.
+            double best = Double.MAX_VALUE, bestX = 0;
+            for (int path : marks.stream().map(PdfRecorder.Vertex::path).distinct().toList()) {
+                List<PdfRecorder.Vertex> p = marks.stream().filter(q -> q.path() == path).toList();
+                double cx = (p.stream().mapToDouble(PdfRecorder.Vertex::x).max().orElseThrow()
+                        + p.stream().mapToDouble(PdfRecorder.Vertex::x).min().orElseThrow()) / 2;
+                double cy = p.stream().mapToDouble(PdfRecorder.Vertex::y).average().orElseThrow();
+                double d = Math.hypot(id.x() - cx, id.y() - cy);
+                if (cx < id.x() && d < best) {
+                    best = d;
+                    bestX = cx;
+                }
+            }
+            double easting = east[0] + (bestX - tickX.get(0)) / slope;
+            assertThat(easting).as(id.text()).isCloseTo(SheetFixture.SOURCES[k][0], within(0.05));
+            found++;
+        }
+        assertThat(found).isPositive();
     }
 
     @Test
