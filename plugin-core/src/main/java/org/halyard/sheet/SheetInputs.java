@@ -59,6 +59,33 @@ public final class SheetInputs {
         }
     }
 
+    /**
+     * Reads a QC summary from a CSV with columns {@code check, value} and optional {@code limit, verdict};
+     * rows whose check is {@code note} become notes (their value is the text).
+     */
+    public static QcSummary qc(Path file) {
+        List<QcSummary.Check> checks = new ArrayList<>();
+        List<String> notes = new ArrayList<>();
+        try (CsvTableReader r = CsvTableReader.open(file)) {
+            int name = r.column("check"), value = r.column("value");
+            int limit = r.findColumn("limit"), verdict = r.findColumn("verdict");
+            while (r.next()) {
+                String n = r.text(name).toString();
+                String v = cell(r, value);
+                if (n.equalsIgnoreCase("note")) {
+                    notes.add(v);
+                } else {
+                    checks.add(new QcSummary.Check(n, v, cell(r, limit), cell(r, verdict)));
+                }
+            }
+        }
+        return new QcSummary(checks, notes);
+    }
+
+    private static String cell(CsvTableReader r, int col) {
+        return col < 0 || r.isEmpty(col) ? "" : r.text(col).toString();
+    }
+
     /** Reads LINESTRING geometries from the {@code wkt} column of a CSV. */
     public static List<Polyline> wktLines(Path file) {
         List<Polyline> out = new ArrayList<>();
