@@ -7,11 +7,6 @@ public enum Orientation {
 
     /** Parses {@code portrait} or {@code landscape}, any case. */
     public static Orientation parse(String s) {
-        for (Orientation o : values()) {
-            if (o.name().equalsIgnoreCase(s.trim())) {
-                return o;
-            }
-        }
-        throw new IllegalArgumentException("unknown orientation '" + s + "': use portrait or landscape");
+        return Paper.parseEnum(Orientation.class, s, "orientation");
     }
 }

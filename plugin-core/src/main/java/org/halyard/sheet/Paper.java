@@ -36,11 +36,17 @@ public enum Paper {
 
     /** Parses {@code A4}, {@code a3} ...; the message lists the accepted names. */
     public static Paper parse(String s) {
-        for (Paper p : values()) {
-            if (p.name().equalsIgnoreCase(s.trim())) {
-                return p;
+        return parseEnum(Paper.class, s, "paper size");
+    }
+
+    /** The constant of {@code type} named {@code s} in any case; the message lists the accepted names. */
+    static <E extends Enum<E>> E parseEnum(Class<E> type, String s, String what) {
+        for (E e : type.getEnumConstants()) {
+            if (e.name().equalsIgnoreCase(s.trim())) {
+                return e;
             }
         }
-        throw new IllegalArgumentException("unknown paper size '" + s + "': use one of A0, A1, A2, A3, A4");
+        throw new IllegalArgumentException("unknown " + what + " '" + s + "': use one of "
+                + java.util.Arrays.toString(type.getEnumConstants()).toLowerCase(java.util.Locale.ROOT));
     }
 }

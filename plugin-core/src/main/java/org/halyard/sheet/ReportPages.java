@@ -54,7 +54,7 @@ public final class ReportPages {
     /** Adds the table's pages to {@code doc}; returns how many. */
     static int addPages(PDDocument doc, TableModel t, SheetTitle title, PageFormat format) {
         PageRect border = format.page().inset(SheetLayout.MARGIN);
-        float footH = TextWrap.height(Cautions.TEXT, border.width() - 2 * CELL_PAD, 6f, false) + 10;
+        float footH = TextWrap.height(Cautions.TEXT, border.width() - 2 * CELL_PAD, 6f, false) + 18;
         PageRect body = new PageRect(border.x() + CELL_PAD, border.y() + footH, border.width() - 2 * CELL_PAD,
                 border.height() - footH - HEAD_BAND - 6);
         float pt = BODY_PT;
@@ -88,9 +88,9 @@ public final class ReportPages {
                     }
                 }
                 c.fill(0x7A1010);
-                c.text("CAUTION", border.x() + CELL_PAD, border.y() + footH - 8, 6.5f, true);
+                c.text("CAUTION", border.x() + CELL_PAD, border.y() + footH - 10, 6.5f, true);
                 TextWrap.draw(c, Cautions.TEXT, new PageRect(border.x() + CELL_PAD, border.y(),
-                        border.width() - 2 * CELL_PAD, footH - 12), 6f, false);
+                        border.width() - 2 * CELL_PAD, footH - 13), 6f, false);
                 MapSheetPage.drawBorder(c, border, title.project() + " | " + t.title() + " | revision "
                         + title.revision() + " | " + title.date());
             }

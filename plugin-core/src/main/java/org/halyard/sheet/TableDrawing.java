@@ -49,8 +49,8 @@ final class TableDrawing {
                             float rowH, float pt, boolean bold) {
         float base = y + (rowH - pt) / 2 + pt * 0.2f;
         for (int i = 0; i < cells.size(); i++) {
-            if (right[i] && !bold) {
-                c.text(cells.get(i), x + widths[i] - ReportPages.CELL_PAD, base, pt, false, 1, 0);
+            if (right[i]) {
+                c.text(cells.get(i), x + widths[i] - ReportPages.CELL_PAD, base, pt, bold, 1, 0);
             } else {
                 c.text(cells.get(i), x + ReportPages.CELL_PAD, base, pt, bold);
             }
