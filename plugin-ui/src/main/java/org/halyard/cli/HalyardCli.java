@@ -18,6 +18,8 @@ import picocli.CommandLine.Option;
         subcommands = {
                 ProcessesCommand.class,
                 FilterCommand.class,
+                SimulateCommand.class,
+                DetectabilityCommand.class,
                 SheetCommand.class,
         })
 public final class HalyardCli implements Callable<Integer> {
