@@ -40,20 +40,31 @@ record ColourBar(RasterLayer layer) implements PanelBlock {
         c.stroke(0x111111, 0.4f);
         c.strokeRect(new PageRect(x0, yBar, w, BAR_PT));
         c.fill(0x111111);
-        double lo = s.valueAt(0), hi = s.valueAt(1);
+        double[] values = new double[LABELS];
+        double step = Double.MAX_VALUE;
         for (int i = 0; i < LABELS; i++) {
-            double f = (double) i / (LABELS - 1);
-            float x = x0 + (float) f * w;
+            values[i] = s.valueAt((double) i / (LABELS - 1));
+            if (i > 0 && values[i] > values[i - 1]) {
+                step = Math.min(step, values[i] - values[i - 1]);
+            }
+        }
+        for (int i = 0; i < LABELS; i++) {
+            float x = x0 + (float) i / (LABELS - 1) * w;
             c.line(x, yBar, x, yBar - 2);
-            c.text(format(s.valueAt(f), hi - lo) + (i == LABELS - 1 ? " " + layer.unit() : ""), x,
+            c.text(format(values[i], step) + (i == LABELS - 1 ? " " + layer.unit() : ""), x,
                     yBar - 2 - LABEL_PT, LABEL_PT, false, i == LABELS - 1 ? 0.35 : 0.5, 0);
         }
         c.end();
     }
 
-    /** A value with as many decimals as the bar's range needs. */
-    static String format(double v, double range) {
-        int decimals = range >= 50 ? 0 : range >= 5 ? 1 : range >= 0.5 ? 2 : 3;
+    /**
+     * A value with as many decimals as the closest pair of labels needs to differ (a histogram stretch
+     * crowds labels near the mode), at most three, and fewer for values of 10 and above.
+     */
+    static String format(double v, double closestStep) {
+        int decimals = (int) Math.max(0, Math.min(3, Math.ceil(-Math.log10(closestStep)) + 1));
+        // Large values read better whole, however crowded their neighbours are.
+        decimals = Math.abs(v) >= 100 ? 0 : Math.abs(v) >= 10 ? Math.min(decimals, 1) : decimals;
         String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
         return s.matches("-0\\.?0*") ? s.substring(1) : s;
     }
