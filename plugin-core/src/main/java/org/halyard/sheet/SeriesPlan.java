@@ -25,7 +25,8 @@ record SeriesPlan(ProjectedCrs crs, SheetLayout layout, SheetLayout indexLayout,
         MapWindow probe = MapWindow.centred(0, 0, new PageRect(0, 0, 100, 100),
                 Math.max(1, r.options().scaleDenominator()));
         SheetFootprint dummy = new SheetFootprint(1, 0, 0, 1, 1);
-        SheetLayout layout = SheetLayout.plan(r.options().format(), SheetBlocks.of(r, crs, "SHEET 1 OF 1",
+        SheetLayout layout = SheetLayout.plan(r.options().format(), SheetBlocks.of(r.perRaster().get(0), crs,
+                "SHEET 1 OF 1",
                 probe, new KeyMap(List.of(dummy), 1, List.of())));
         SheetLayout indexLayout = SheetLayout.plan(r.options().format(),
                 SheetBlocks.of(r.withoutRasters(), crs, "INDEX", probe, null));

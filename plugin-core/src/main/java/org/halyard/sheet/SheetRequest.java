@@ -21,6 +21,19 @@ public record SheetRequest(SheetTitle title, String crsCode, MapContent content,
         }
     }
 
+    /**
+     * One request per raster layer, each with all vectors and targets, so that every grid gets its own page
+     * (rasters are opaque: stacked, only the top one would show); the request itself when it has at most
+     * one raster.
+     */
+    java.util.List<SheetRequest> perRaster() {
+        if (content.rasters().size() <= 1) {
+            return java.util.List.of(this);
+        }
+        return content.rasters().stream().map(r -> new SheetRequest(title, crsCode, new MapContent(
+                java.util.List.of(r), content.vectors(), content.targets()), coverage, options)).toList();
+    }
+
     /** The same request without its raster layers: the index sheet shows the sheet layout, not the data. */
     SheetRequest withoutRasters() {
         return new SheetRequest(title, crsCode, new MapContent(java.util.List.of(), content.vectors(),

@@ -26,7 +26,8 @@ public final class SheetSeries {
 
     /**
      * Writes {@code index.pdf} and {@code sheet-01.pdf}, {@code sheet-02.pdf} ... into {@code dir}
-     * (created if missing).
+     * (created if missing). A sheet file has one page per raster layer, in layer order, each with every
+     * vector layer and target.
      *
      * @return the files and footprints written
      * @throws IllegalArgumentException for a bad request (unknown CRS, nothing to map, panel too big)
@@ -47,11 +48,17 @@ public final class SheetSeries {
             MapWindow w = MapWindow.centred(fp.centreX(), fp.centreY(), plan.layout().frame(), plan.scale());
             String label = String.format(Locale.ROOT, "SHEET %d OF %d", fp.number(), n);
             KeyMap key = new KeyMap(plan.footprints(), fp.number(), plan.coverageLines());
-            List<PanelBlock> blocks = SheetBlocks.of(request, crs, label, w, key);
+            List<MapSheetPage> pages = new ArrayList<>();
+            for (SheetRequest view : request.perRaster()) {
+                String layer = view.content().rasters().isEmpty() ? ""
+                        : " | " + view.content().rasters().get(0).name();
+                pages.add(new MapSheetPage(request.options().format(), plan.layout(), w,
+                        SheetBlocks.of(view, crs, label, w, key), view.content(), crs, request.options().dpi(),
+                        request.options().graticule(), List.of(),
+                        footer(request, "Sheet " + fp.number() + " of " + n + layer)));
+            }
             Path file = dir.resolve(String.format(Locale.ROOT, "sheet-" + digits + ".pdf", fp.number()));
-            save(file, new MapSheetPage(request.options().format(), plan.layout(), w, blocks, request.content(),
-                    crs, request.options().dpi(), request.options().graticule(), List.of(),
-                    footer(request, "Sheet " + fp.number() + " of " + n)));
+            save(file, pages);
             files.add(file);
         }
         Path index = dir.resolve("index.pdf");
@@ -70,9 +77,9 @@ public final class SheetSeries {
         int n = plan.footprints().size();
         String label = n == 1 ? "INDEX TO SHEET 1" : "INDEX TO SHEETS 1-" + n;
         List<PanelBlock> blocks = SheetBlocks.of(request, plan.crs(), label, w, null);
-        save(file, new MapSheetPage(request.options().format(), layout, w, blocks, request.content(), plan.crs(),
-                request.options().dpi(), request.options().graticule(), plan.footprints(),
-                footer(request, "Index sheet")));
+        save(file, List.of(new MapSheetPage(request.options().format(), layout, w, blocks, request.content(),
+                plan.crs(), request.options().dpi(), request.options().graticule(), plan.footprints(),
+                footer(request, "Index sheet"))));
     }
 
     private static String footer(SheetRequest r, String which) {
@@ -80,11 +87,11 @@ public final class SheetSeries {
                 + r.title().revision() + " | " + r.title().date();
     }
 
-    private static void save(Path file, MapSheetPage page) {
+    private static void save(Path file, List<MapSheetPage> pages) {
         try (PDDocument doc = new PDDocument()) {
-            doc.getDocumentInformation().setTitle(page.footer());
+            doc.getDocumentInformation().setTitle(pages.get(0).footer());
             doc.getDocumentInformation().setCreator("Halyard");
-            page.addTo(doc);
+            pages.forEach(p -> p.addTo(doc));
             doc.save(file.toFile());
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + file + ": " + e.getMessage(), e);

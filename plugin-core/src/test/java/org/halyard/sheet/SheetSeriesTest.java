@@ -158,6 +158,26 @@ class SheetSeriesTest {
     }
 
     @Test
+    void eachRasterLayerGetsItsOwnPage(@TempDir Path out) throws IOException {
+        MapContent one = SheetFixture.content();
+        RasterLayer first = one.rasters().get(0);
+        RasterLayer second = SheetLayers.raster("Vertical derivative", first.grid(), "nT/m",
+                SheetLayers.StretchKind.LINEAR);
+        MapContent two = new MapContent(List.of(first, second), one.vectors(), one.targets());
+        SheetSet s = SheetSeries.write(new SheetRequest(SheetFixture.title(), SheetFixture.CRS, two,
+                new Coverage.AllContent(), SheetOptions.defaults().withDpi(50)), out);
+        assertThat(s.sheets()).hasSize(1);
+        try (PDDocument d = Loader.loadPDF(s.sheets().get(0).toFile())) {
+            assertThat(d.getNumberOfPages()).isEqualTo(2);
+            PDFTextStripper t = new PDFTextStripper();
+            t.setStartPage(2);
+            t.setEndPage(2);
+            String p2 = t.getText(d);
+            assertThat(p2).contains("VERTICAL DERIVATIVE (nT/m)", "SHEET 1 OF 1").doesNotContain("TOTAL FIELD (nT)");
+        }
+    }
+
+    @Test
     void footprintsOverlapByTheRequestedFraction() {
         SheetFootprint a = set.footprints().get(0), b = set.footprints().get(1);
         double width = a.east() - a.west();
