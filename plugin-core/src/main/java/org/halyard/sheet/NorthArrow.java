@@ -17,7 +17,7 @@ import java.util.Locale;
  */
 record NorthArrow(double convergenceDeg, double centreX, double centreY) implements PanelBlock {
 
-    static final double MIN_DRAWN_DEG = 4;
+    static final double MIN_DRAWN_DEG = 12;
     private static final float DIAGRAM = 40f;
     private static final float NOTE_PT = 6f;
 
@@ -63,6 +63,7 @@ record NorthArrow(double convergenceDeg, double centreX, double centreY) impleme
         c.stroke(0x0E6E6E, 0.7f);
         c.line(cx, base, tx, ty);
         c.fill(0x0E6E6E);
+        c.circle(tx, ty, 1.3, true);
         c.text("TN", tx - 3 * Math.signum(drawn), ty - 4, 6f, true, drawn >= 0 ? 1 : 0, 0);
         c.end();
         c.fill(0x111111);

@@ -21,6 +21,11 @@ public record SheetRequest(SheetTitle title, String crsCode, MapContent content,
         }
     }
 
+    /** A request covering all of {@code content} with {@link SheetOptions#defaults()}. */
+    public static SheetRequest of(SheetTitle title, String crsCode, MapContent content) {
+        return new SheetRequest(title, crsCode, content, new Coverage.AllContent(), SheetOptions.defaults());
+    }
+
     /**
      * One request per raster layer, each with all vectors and targets, so that every grid gets its own page
      * (rasters are opaque: stacked, only the top one would show); the request itself when it has at most

@@ -78,6 +78,27 @@ class GraticuleTest {
         assertThat(checked).isGreaterThanOrEqualTo(3);
     }
 
+    @Test
+    void printedConvergenceMatchesProjAtThePrintedPoint() throws IOException {
+        ExternalTools.require("proj");
+        SheetSet set = SheetSeries.write(SheetFixture.request(new Coverage.AllContent(),
+                SheetOptions.defaults().withDpi(50)), dir);
+        String text;
+        try (PDDocument d = Loader.loadPDF(set.sheets().get(0).toFile())) {
+            text = new org.apache.pdfbox.text.PDFTextStripper().getText(d).replaceAll("\\s+", " ");
+        }
+        var m = java.util.regex.Pattern.compile(
+                "Grid convergence ([+-][0-9.]+)\u00b0 at sheet centre (\\d+)mE (\\d+)mN").matcher(text);
+        assertThat(m.find()).as(text).isTrue();
+        String out = ExternalTools.run(List.of("sh", "-c", "echo '" + m.group(2) + " " + m.group(3)
+                + "' | proj -I -f %.10f +proj=utm +zone=31 +datum=WGS84 | proj -V +proj=utm +zone=31 +datum=WGS84"),
+                null).orFail();
+        var c = java.util.regex.Pattern.compile("Convergence : .*\\[\\s*(-?[0-9.]+)\\s*]").matcher(out);
+        assertThat(c.find()).as(out).isTrue();
+        // PROJ 'proj -V' meridian convergence; the sheet prints three decimals.
+        assertThat(Double.parseDouble(m.group(1))).isCloseTo(Double.parseDouble(c.group(1)), within(0.0006));
+    }
+
     private static double range(double[] a) {
         double lo = Double.MAX_VALUE, hi = -Double.MAX_VALUE;
         for (double v : a) {
