@@ -42,10 +42,11 @@ final class MapBody {
             v.lines().forEach(p -> strokeGround(c, w, p, false));
         }
         c.end();
+        drawTargets(c, w, content.targets());
         if (!footprints.isEmpty()) {
+            // Over the targets: on the index sheet the sheet numbers matter most.
             Footprints.draw(c, w, footprints, 0, 14f);
         }
-        drawTargets(c, w, content.targets());
         if (graticule) {
             Graticule.draw(c, w, crs);
         }
