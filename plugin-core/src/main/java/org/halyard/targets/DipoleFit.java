@@ -51,18 +51,23 @@ public final class DipoleFit {
     }
 
     /**
-     * Fits a dipole to the samples within the options' radius of (x, y).
+     * Fits a dipole to the samples within the options' radius of (x, y), from each start in turn, and keeps
+     * the fit with the smallest residual that {@code accept} allows; every start sees the same samples, so
+     * the residuals compare. Several starts guard against the local minima that trade position against
+     * moment direction for weak sources.
      *
-     * @param x           start easting, m
-     * @param y           start northing, m
-     * @param depthBelow  start depth of the source below the sensors, m, positive down
-     * @param field       Earth-field direction (inclination positive down, declination clockwise from north)
-     * @param known       sources already fitted (stronger neighbours): their field is removed from the samples
-     *                    first, so that their flanks do not bias this fit
-     * @return the fit, or empty when too few samples are near or the fit fails
+     * @param x      easting of the centre of the sample selection, m
+     * @param y      northing of the centre of the sample selection, m
+     * @param starts start positions {x (m), y (m), depth below the sensors (m, positive down)}
+     * @param field  Earth-field direction (inclination positive down, declination clockwise from north)
+     * @param known  sources already fitted (stronger neighbours): their field is removed from the samples
+     *               first, so that their flanks do not bias this fit
+     * @param accept which fits may be returned
+     * @return the best fit, or empty when too few samples are near or no start gives an acceptable fit
      */
     public static Optional<DipoleFitResult> fit(LineSamples samples, FieldDirection field, double x, double y,
-                                                double depthBelow, DipoleFitOptions options, List<Dipole> known) {
+                                                List<double[]> starts, DipoleFitOptions options, List<Dipole> known,
+                                                java.util.function.Predicate<DipoleFitResult> accept) {
         int[] idx = samples.near(x, y, options.radiusM());
         if (idx.length < options.minSamples()) {
             return Optional.empty();
@@ -78,9 +83,28 @@ public final class DipoleFit {
             }
         }
         double sensorDepth = LineSamples.medianAt(samples.z(), idx);
-        double z0 = sensorDepth + Math.max(MIN_DEPTH_BELOW_SENSOR, depthBelow);
         Model model = new Model(obs, field, options.background().terms, x, y);
-        double[] start = model.linearStart(x, y, z0, target);
+        Optional<DipoleFitResult> best = Optional.empty();
+        for (double[] s : starts) {
+            Optional<DipoleFitResult> f = optimise(model, target, s, sensorDepth, options).filter(accept);
+            if (f.isPresent() && (best.isEmpty() || f.get().rms() < best.get().rms())) {
+                best = f;
+            }
+        }
+        return best;
+    }
+
+    /** {@link #fit(LineSamples, FieldDirection, double, double, List, DipoleFitOptions, List, java.util.function.Predicate)}
+     *  from one start (x, y, {@code depthBelow} m under the sensors), no known neighbours, any result accepted. */
+    public static Optional<DipoleFitResult> fit(LineSamples samples, FieldDirection field, double x, double y,
+                                                double depthBelow, DipoleFitOptions options) {
+        return fit(samples, field, x, y, List.of(new double[] {x, y, depthBelow}), options, List.of(), r -> true);
+    }
+
+    private static Optional<DipoleFitResult> optimise(Model model, double[] target, double[] s, double sensorDepth,
+                                                      DipoleFitOptions options) {
+        double z0 = sensorDepth + Math.max(MIN_DEPTH_BELOW_SENSOR, s[2]);
+        double[] start = model.linearStart(s[0], s[1], z0, target);
         double floor = sensorDepth + MIN_DEPTH_BELOW_SENSOR;
         LeastSquaresOptimizer.Optimum opt;
         try {
@@ -95,7 +119,7 @@ public final class DipoleFit {
         } catch (TooManyIterationsException | TooManyEvaluationsException | ConvergenceException e) {
             return Optional.empty();
         }
-        return result(opt, idx.length, sensorDepth);
+        return result(opt, target.length, sensorDepth);
     }
 
     private static Optional<DipoleFitResult> result(LeastSquaresOptimizer.Optimum opt, int n, double sensorDepth) {

@@ -7,8 +7,12 @@ package org.halyard.targets;
  * @param background     the background fitted with the dipole
  * @param minSamples     fewer usable samples than this and no fit is attempted
  * @param maxIterations  Levenberg-Marquardt iteration cap
+ * @param maxShiftFactor a fit landing farther from the analytic-signal peak than this times its depth below
+ *                       the sensors (and more than 1 m) is rejected: the peak of the analytic signal lies
+ *                       nearly over a compact source whatever its magnetisation (Roest et al. 1992)
  */
-public record DipoleFitOptions(double radiusM, Background background, int minSamples, int maxIterations) {
+public record DipoleFitOptions(double radiusM, Background background, int minSamples, int maxIterations,
+                               double maxShiftFactor) {
 
     /** What is fitted beside the dipole. */
     public enum Background {
@@ -27,8 +31,8 @@ public record DipoleFitOptions(double radiusM, Background background, int minSam
         }
     }
 
-    /** 6 m radius, a plane background, at least 20 samples, 200 iterations. */
-    public static final DipoleFitOptions DEFAULT = new DipoleFitOptions(6, Background.PLANE, 20, 200);
+    /** 6 m radius, a plane background, at least 20 samples, 200 iterations, shift up to half the depth. */
+    public static final DipoleFitOptions DEFAULT = new DipoleFitOptions(6, Background.PLANE, 20, 200, 0.5);
 
     public DipoleFitOptions {
         if (!(radiusM > 0)) {
@@ -39,6 +43,9 @@ public record DipoleFitOptions(double radiusM, Background background, int minSam
         }
         if (minSamples < 8) {
             throw new IllegalArgumentException("a dipole fit needs at least 8 samples, got " + minSamples);
+        }
+        if (!(maxShiftFactor > 0)) {
+            throw new IllegalArgumentException("dipole fit shift factor must be positive, got " + maxShiftFactor);
         }
         if (maxIterations < 1) {
             throw new IllegalArgumentException("dipole fit needs at least one iteration, got " + maxIterations);

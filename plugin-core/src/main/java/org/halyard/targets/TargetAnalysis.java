@@ -89,14 +89,8 @@ public final class TargetAnalysis {
         Optional<EulerSolution> euler = linear
                 ? EulerDeconvolution.solveAcross(in.grids(), pk.x(), pk.y(), strikeAt(feature.get().line(), pk.x(), pk.y()), eo)
                 : EulerDeconvolution.solve(in.grids(), pk.x(), pk.y(), eo);
-        Optional<DipoleFitResult> fit = Optional.empty();
-        if (!linear && in.samples().size() > 0) {
-            double sx = euler.map(EulerSolution::x).orElse(pk.x());
-            double sy = euler.map(EulerSolution::y).orElse(pk.y());
-            double sd = euler.map(EulerSolution::depth).orElse(o.startDepthM());
-            fit = DipoleFit.fit(in.samples(), in.field(), sx, sy, sd, o.fit(), near(fitted, pk, 4 * o.fit().radiusM()))
-                    .filter(f -> Math.hypot(f.dipole().x() - pk.x(), f.dipole().y() - pk.y()) <= o.fit().radiusM());
-        }
+        Optional<DipoleFitResult> fit = linear || in.samples().size() == 0 ? Optional.empty()
+                : fitDipole(pk, euler, in, o, near(fitted, pk, 4 * o.fit().radiusM()));
         double x = fit.map(f -> f.dipole().x()).orElse(euler.map(EulerSolution::x).orElse(pk.x()));
         double y = fit.map(f -> f.dipole().y()).orElse(euler.map(EulerSolution::y).orElse(pk.y()));
         double depth = fit.map(DipoleFitResult::depthBelowSensor).orElse(euler.map(EulerSolution::depth).orElse(Double.NaN));
@@ -108,6 +102,26 @@ public final class TargetAnalysis {
         Optional<String> asset = linear ? feature.get().asset() : matcher.match(x, y);
         return new Target(id, x, y, linear ? TargetClass.LINEAR : TargetClass.DISCRETE, depth, method, burial,
                 pk.amplitude(), euler, fit, mass, asset);
+    }
+
+    /** Start depths below the sensors tried from the pick besides the Euler solution, m. */
+    static final double[] START_DEPTHS = {1.5, 3, 5};
+
+    /**
+     * The best fit from the Euler solution and from the pick at several depths, among those that land near
+     * the peak (samples selected around the pick).
+     */
+    private static Optional<DipoleFitResult> fitDipole(Peak pk, Optional<EulerSolution> euler, TargetInputs in,
+                                                       TargetOptions o, List<Dipole> known) {
+        List<double[]> starts = new ArrayList<>();
+        euler.ifPresent(e -> starts.add(new double[] {e.x(), e.y(), e.depth()}));
+        starts.add(new double[] {pk.x(), pk.y(), o.startDepthM()});
+        for (double d : START_DEPTHS) {
+            starts.add(new double[] {pk.x(), pk.y(), d});
+        }
+        return DipoleFit.fit(in.samples(), in.field(), pk.x(), pk.y(), starts, o.fit(), known,
+                r -> Math.hypot(r.dipole().x() - pk.x(), r.dipole().y() - pk.y())
+                        <= Math.max(1, o.fit().maxShiftFactor() * r.depthBelowSensor()));
     }
 
     private static List<Dipole> near(List<Dipole> dipoles, Peak pk, double radius) {

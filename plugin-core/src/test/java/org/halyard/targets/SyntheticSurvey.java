@@ -30,21 +30,29 @@ final class SyntheticSurvey {
     }
 
     double total(double x, double y, double z) {
+        return total(x, y, z, near(x, y));
+    }
+
+    /** The sources within the cutoff of (x, y): chosen once per point so that differences stay smooth. */
+    List<Dipole> near(double x, double y) {
+        return sources.stream().filter(d -> Math.abs(d.x() - x) < CUTOFF && Math.abs(d.y() - y) < CUTOFF).toList();
+    }
+
+    static double total(double x, double y, double z, List<Dipole> near) {
         double t = 0;
-        for (Dipole d : sources) {
-            if (Math.abs(d.x() - x) < CUTOFF && Math.abs(d.y() - y) < CUTOFF) {
-                t += d.totalField(x, y, z, FIELD);
-            }
+        for (Dipole d : near) {
+            t += d.totalField(x, y, z, FIELD);
         }
         return t;
     }
 
     /** {T, Tx, Ty, Tz} at a point, nT and nT/m, z down. */
     double[] withGradient(double x, double y, double z) {
-        return new double[] {total(x, y, z),
-            (total(x + STEP, y, z) - total(x - STEP, y, z)) / (2 * STEP),
-            (total(x, y + STEP, z) - total(x, y - STEP, z)) / (2 * STEP),
-            (total(x, y, z + STEP) - total(x, y, z - STEP)) / (2 * STEP)};
+        List<Dipole> n = near(x, y);
+        return new double[] {total(x, y, z, n),
+            (total(x + STEP, y, z, n) - total(x - STEP, y, z, n)) / (2 * STEP),
+            (total(x, y + STEP, z, n) - total(x, y - STEP, z, n)) / (2 * STEP),
+            (total(x, y, z + STEP, n) - total(x, y, z - STEP, n)) / (2 * STEP)};
     }
 
     /** Grids at the sensor level with Gaussian noise of {@code noiseT} nT and {@code noiseG} nT/m. */

@@ -54,7 +54,7 @@ class TargetAnalysisDiscreteTest {
         }
         SyntheticSurvey s = new SyntheticSurvey(truth, SENSOR_DEPTH);
         GridGeometry geo = new GridGeometry(260, 260, 0, 130, 0.5, "EPSG:32631");
-        FieldGrids grids = s.grids(geo, 0.1, 0.01, 11);
+        FieldGrids grids = s.grids(geo, 0.1, 0.03, 11);
         peakAs = new double[truth.size()];
         for (int k = 0; k < truth.size(); k++) {
             Dipole d = truth.get(k);
@@ -97,16 +97,8 @@ class TargetAnalysisDiscreteTest {
         long hits = e.stream().filter(k -> found(truth.get(k)).isPresent()).count();
         System.out.printf("recall %d / %d eligible (of %d), %d picks, noise %.4g nT/m%n", hits, e.size(), truth.size(),
                 result.targets().size(), result.noise().sigma());
-        for (int k : e) {
-            Dipole d = truth.get(k);
-            if (found(d).isEmpty()) {
-                truth.stream().filter(o -> Math.hypot(o.x() - d.x(), o.y() - d.y()) < 30)
-                        .forEach(o -> System.out.printf("  neighbour %.1f %.1f z %.2f m %.3f%n", o.x(), o.y(), o.z(), o.moment()));
-                System.out.printf("missed %d %s peakAS %.3f; near: %s%n", k, d, peakAs[k], result.targets().stream()
-                        .filter(t -> Math.hypot(t.x() - d.x(), t.y() - d.y()) < 4).toList());
-            }
-        }
-        System.out.println("features " + result.features());
+        e.stream().filter(k -> found(truth.get(k)).isEmpty())
+                .forEach(k -> System.out.printf("missed %s, peak analytic signal %.3f nT/m%n", truth.get(k), peakAs[k]));
         assertThat(e.size()).isGreaterThan(20); // the fixture must exercise the test (design of the fixture)
         assertThat((double) hits / e.size()).isGreaterThanOrEqualTo(0.95); // issue 5 acceptance
     }
@@ -158,8 +150,10 @@ class TargetAnalysisDiscreteTest {
             Dipole d = truth.get(k);
             found(d).filter(t -> t.fit().isPresent()).ifPresent(t -> {
                 assertThat(t.burial().basis()).isEqualTo("bathymetry");
-                // Definition (Burial): sensor depth + depth below sensor - seabed; the sensor depth wobbles 0.1 m.
-                assertThat(t.burial().metres()).isCloseTo(d.z() - SEABED, org.assertj.core.data.Offset.offset(0.6));
+                // Definition (Burial): sensor depth + depth below sensor - seabed; within three standard errors of
+                // the fitted depth plus the 0.1 m sensor-depth wobble of the fixture.
+                double tol = 3 * t.fit().get().sigmaZ() + 0.1;
+                assertThat(t.burial().metres()).isCloseTo(d.z() - SEABED, org.assertj.core.data.Offset.offset(tol));
             });
         }
     }
