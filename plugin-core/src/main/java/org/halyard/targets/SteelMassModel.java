@@ -1,5 +1,7 @@
 package org.halyard.targets;
 
+import org.halyard.model.SteelSphere;
+
 /**
  * Moment to mass for steel objects magnetised by the Earth's field.
  *
@@ -19,11 +21,8 @@ package org.halyard.targets;
  */
 public record SteelMassModel(double densityKgM3, double maxAspect) {
 
-    /** Permeability of free space, T m / A (CODATA, 4 pi 1e-7 to 1e-9 relative). */
-    static final double MU0 = 4e-7 * Math.PI;
-
     /** Solid steel (7850 kg/m3, DOMAIN.md), bodies up to five times longer than wide (assumed). */
-    public static final SteelMassModel DEFAULT = new SteelMassModel(7850, 5);
+    public static final SteelMassModel DEFAULT = new SteelMassModel(SteelSphere.STEEL_DENSITY, 5);
 
     public SteelMassModel {
         if (!(densityKgM3 > 0)) {
@@ -38,10 +37,8 @@ public record SteelMassModel(double densityKgM3, double maxAspect) {
      * The mass range for moment {@code momentAm2} (A m2) induced by a main field of {@code fieldNt} nT.
      */
     public MassRange massRange(double momentAm2, double fieldNt) {
-        if (!(fieldNt > 0)) {
-            throw new IllegalArgumentException("main-field intensity must be positive nT, got " + fieldNt);
-        }
-        double perN = densityKgM3 * Math.abs(momentAm2) * MU0 / (fieldNt * 1e-9);
+        // The sphere (N = 1/3) from the model package, scaled to this density and to N = 1.
+        double perN = 3 * SteelSphere.massForMoment(Math.abs(momentAm2), fieldNt) * densityKgM3 / SteelSphere.STEEL_DENSITY;
         return new MassRange(perN * SpheroidDemagnetisation.axial(maxAspect), perN / 3,
                 perN * SpheroidDemagnetisation.transverse(maxAspect));
     }

@@ -40,10 +40,10 @@ class EulerDeconvolutionTest {
     @Test
     void lineSourceAcrossItsStrikeWithIndexTwo() {
         // An infinite horizontal line of dipoles is homogeneous of degree -2 (Reid et al. 1990, table 1: N = 2).
-        SyntheticSurvey s = new SyntheticSurvey(SyntheticSurvey.line(20, -60, 20, 100, 13.0, 0.5, 0.1), 10.0);
+        SyntheticSurvey s = new SyntheticSurvey(List.of(), List.of(SyntheticSurvey.line(20, -60, 20, 100, 13.0, 0.5)), 10.0);
         FieldGrids g = s.grids(GEO, 0, 0, 1);
         EulerSolution e = EulerDeconvolution.solveAcross(g, 20.5, 20, 0, EulerOptions.LINEAR).orElseThrow();
-        assertThat(e.depth()).isCloseTo(3.0, offset(0.06)); // 2%: a line of discrete dipoles 0.1 m apart
+        assertThat(e.depth()).isCloseTo(3.0, offset(0.06)); // 2%: a line of discrete dipoles 0.5 m apart
         assertThat(e.x()).isCloseTo(20, offset(0.05));
     }
 

@@ -2,7 +2,6 @@ package org.halyard.targets;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.halyard.grid.Grid;
@@ -46,14 +45,12 @@ class LinearFeatureTest {
     static void survey() {
         cable = segment(45, 55, CABLE_AZ, 70);
         pipe = segment(60, 20, PIPE_AZ, 50);
-        List<Dipole> all = new ArrayList<>();
-        all.addAll(SyntheticSurvey.line(cable[0], cable[1], cable[2], cable[3], 20.8, 0.3, 0.25));
-        all.addAll(SyntheticSurvey.line(pipe[0], pipe[1], pipe[2], pipe[3], 21.5, 2.0, 0.25));
         discrete = List.of(Dipole.along(15, 85, 20.5, 2, SyntheticSurvey.FIELD),
                 Dipole.along(80, 80, 21, 5, SyntheticSurvey.FIELD),
                 Dipole.along(20, 20, 20.3, 1, SyntheticSurvey.FIELD));
-        all.addAll(discrete);
-        SyntheticSurvey s = new SyntheticSurvey(all, SENSOR_DEPTH);
+        SyntheticSurvey s = new SyntheticSurvey(discrete, List.of(
+                SyntheticSurvey.line(cable[0], cable[1], cable[2], cable[3], 20.8, 0.3),
+                SyntheticSurvey.line(pipe[0], pipe[1], pipe[2], pipe[3], 21.5, 2.0)), SENSOR_DEPTH);
         GridGeometry geo = new GridGeometry(200, 200, 0, 100, 0.5, "EPSG:32631");
         FieldGrids grids = s.grids(geo, 0.1, 0.01, 21);
         LineSamples lines = s.lines(1.5, 100, 0, 100, 3, 0.1, 2.5, 22);
