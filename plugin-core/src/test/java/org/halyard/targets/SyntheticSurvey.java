@@ -15,9 +15,9 @@ import org.halyard.model.FieldDirection;
  * Derivatives are central differences of the closed form (step 1 cm), adequate to 1e-5 relative for
  * sources metres away (Taylor remainder of order h^2 / r^2).
  */
-final class SyntheticSurvey {
+public final class SyntheticSurvey {
 
-    static final FieldDirection FIELD = new FieldDirection(66, 1.5);
+    public static final FieldDirection FIELD = new FieldDirection(66, 1.5);
     static final double STEP = 0.01;
     /** Sources farther than this from a point are left out of its sum, m (their field is below 1e-4 nT). */
     static final double CUTOFF = 40;
@@ -26,12 +26,12 @@ final class SyntheticSurvey {
     final List<DipoleLine> lines;
     final double sensorDepth;
 
-    SyntheticSurvey(List<Dipole> sources, double sensorDepth) {
+    public SyntheticSurvey(List<Dipole> sources, double sensorDepth) {
         this(sources, List.of(), sensorDepth);
     }
 
     /** Point dipoles and lines of dipoles (cables, pipes; DOMAIN.md) under sensors at {@code sensorDepth}. */
-    SyntheticSurvey(List<Dipole> sources, List<DipoleLine> lines, double sensorDepth) {
+    public SyntheticSurvey(List<Dipole> sources, List<DipoleLine> lines, double sensorDepth) {
         this.sources = List.copyOf(sources);
         this.lines = List.copyOf(lines);
         this.sensorDepth = sensorDepth;
@@ -58,7 +58,7 @@ final class SyntheticSurvey {
     }
 
     /** {T, Tx, Ty, Tz} at a point, nT and nT/m, z down. */
-    double[] withGradient(double x, double y, double z) {
+    public double[] withGradient(double x, double y, double z) {
         List<Dipole> n = near(x, y);
         return new double[] {total(x, y, z, n),
             (total(x + STEP, y, z, n) - total(x - STEP, y, z, n)) / (2 * STEP),
@@ -67,7 +67,7 @@ final class SyntheticSurvey {
     }
 
     /** Grids at the sensor level with Gaussian noise of {@code noiseT} nT and {@code noiseG} nT/m. */
-    FieldGrids grids(GridGeometry geo, double noiseT, double noiseG, long seed) {
+    public FieldGrids grids(GridGeometry geo, double noiseT, double noiseG, long seed) {
         Random rnd = new Random(seed);
         float[][] v = new float[4][geo.size()];
         for (int r = 0; r < geo.rows(); r++) {
@@ -112,7 +112,7 @@ final class SyntheticSurvey {
 
     /** A straight cable or pipe of induced dipoles every 0.5 m (DOMAIN.md), as {@link DipoleLine}: below a
      *  third of the 3 m sensor distance, as its javadoc asks. */
-    static DipoleLine line(double xa, double ya, double xb, double yb, double depth, double momentPerMetre) {
+    public static DipoleLine line(double xa, double ya, double xb, double yb, double depth, double momentPerMetre) {
         return new DipoleLine(new double[] {xa, ya, depth, xb, yb, depth}, momentPerMetre, FIELD, 0.5);
     }
 }
