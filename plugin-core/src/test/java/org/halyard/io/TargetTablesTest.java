@@ -51,8 +51,7 @@ class TargetTablesTest {
         assertThat(meta.get("mass_assumptions").asText()).contains("7850");
     }
 
-    @Test
-    void rowsCarryTheValuesAndLeaveUnknownsEmpty() throws Exception {
+    static TargetResult sample() {
         GeometryFactory gf = new GeometryFactory();
         var line = gf.createLineString(new Coordinate[] {new Coordinate(0, 0), new Coordinate(30, 40)});
         Target discrete = new Target(1, 500123.25, 5700456.5, TargetClass.DISCRETE, 3.2, "euler-si3",
@@ -64,6 +63,12 @@ class TargetTablesTest {
         TargetResult r = new TargetResult(List.of(discrete, onCable),
                 List.of(new LinearFeature(1, line, 0.4, 3.3, Optional.of("CBL-1"))),
                 new NoiseEstimate(0.01, 0.002), 0.02, List.of(), TargetOptions.DEFAULT);
+        return r;
+    }
+
+    @Test
+    void rowsCarryTheValuesAndLeaveUnknownsEmpty() throws Exception {
+        TargetResult r = sample();
         TargetTables.writeAll(dir, r);
         List<String> t = Files.readAllLines(dir.resolve("targets.csv"));
         assertThat(t).hasSize(3);
@@ -71,6 +76,23 @@ class TargetTablesTest {
         assertThat(t.get(2)).startsWith("2,15,20,linear,3.3,1.1,0.5,,,,,euler-si2");
         List<String> f = Files.readAllLines(dir.resolve("linear_features.csv"));
         assertThat(f.get(1)).startsWith("1,\"LINESTRING (0 0, 30 40)\",50,CBL-1"); // 3-4-5 triangle: 50 m
+    }
+
+    @Test
+    @org.junit.jupiter.api.Tag("external")
+    void layersCarryEveryAttributeAndGdalReadsThem() throws Exception {
+        org.halyard.testing.ExternalTools.require("ogrinfo");
+        TargetResult r = sample();
+        Path gpkg = dir.resolve("halyard.gpkg");
+        GeoPackageWriter.write(gpkg, TargetTables.layers(r, "EPSG:32631"), java.time.Instant.parse("2026-05-14T09:30:00Z"));
+        FeatureLayer back = GeoPackageReader.read(gpkg, "targets");
+        assertThat(back.features()).hasSize(2);
+        assertThat(back.columns().stream().map(FeatureLayer.Column::name).toList())
+                .containsAll(TargetTables.targetColumns().subList(1, TargetTables.targetColumns().size()));
+        assertThat(back.features().get(0).attributes().get("burial_m")).isNull(); // unknown stays NULL
+        String info = org.halyard.testing.ExternalTools.run(List.of("ogrinfo", "-so", gpkg.toString(), "linear_features"),
+                dir).orFail();
+        assertThat(info).contains("Feature Count: 1").contains("azimuth_deg");
     }
 
     @Test
