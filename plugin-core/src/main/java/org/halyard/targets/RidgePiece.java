@@ -75,7 +75,8 @@ final class RidgePiece {
 
     /**
      * Whether {@code other} continues this piece: axes within {@code maxTurnDeg}, a gap of at most
-     * {@code maxGap} between their nearest ends, and each end within {@code maxOffset} of the other's axis.
+     * {@code maxGap} between their nearest ends (or overlapping), and each of the two facing ends within
+     * {@code maxOffset} of the other piece's axis.
      */
     boolean continues(RidgePiece other, double maxTurnDeg, double maxGap, double maxOffset) {
         double cos = Math.abs(ux * other.ux + uy * other.uy);
@@ -84,12 +85,19 @@ final class RidgePiece {
         }
         double[] a = ends(), b = other.ends();
         double gap = Double.POSITIVE_INFINITY;
+        int ai = 0, bj = 0;
         for (int i = 0; i < 4; i += 2) {
             for (int j = 0; j < 4; j += 2) {
-                gap = Math.min(gap, Math.hypot(a[i] - b[j], a[i + 1] - b[j + 1]));
+                double d = Math.hypot(a[i] - b[j], a[i + 1] - b[j + 1]);
+                if (d < gap) {
+                    gap = d;
+                    ai = i;
+                    bj = j;
+                }
             }
         }
-        double offset = Math.max(across(other.cx, other.cy), other.across(cx, cy));
+        // Offsets at the facing ends: a bend keeps them small, a parallel neighbour does not.
+        double offset = Math.max(across(b[bj], b[bj + 1]), other.across(a[ai], a[ai + 1]));
         boolean overlapping = other.along(a[0], a[1]) * other.along(a[2], a[3]) < 0
                 || along(b[0], b[1]) * along(b[2], b[3]) < 0;
         return (gap <= maxGap || overlapping) && offset <= maxOffset;
