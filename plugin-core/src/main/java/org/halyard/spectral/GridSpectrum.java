@@ -138,12 +138,20 @@ public final class GridSpectrum {
         });
         p.report(40);
         p.checkCanceled();
-        parallel(nc / 2 + 1, k -> new Column(nr), (col, k) -> {
-            col.gather(s, stride, k);
-            col.fft.complexForward(col.buf);
-            col.scatter(s, stride, k, nr);
+        int ncols = nc / 2 + 1;
+        parallel(blocks(ncols), t -> new Columns(nr), (cols, b) -> {
+            int k0 = b * Columns.BLOCK, n = Math.min(Columns.BLOCK, ncols - k0);
+            cols.gather(s, stride, k0, n, nr);
+            for (int j = 0; j < n; j++) {
+                cols.fft.complexForward(cols.buf[j]);
+            }
+            cols.scatter(s, stride, k0, n, nr);
         });
         p.report(100);
+    }
+
+    private static int blocks(int ncols) {
+        return (ncols + Columns.BLOCK - 1) / Columns.BLOCK;
     }
 
     /** The geometry of the source grid. */
@@ -184,28 +192,30 @@ public final class GridSpectrum {
         double dky = 2 * Math.PI / (nr * geometry.cellSize());
         AtomicInteger done = new AtomicInteger();
         int ncols = nc / 2 + 1;
-        parallel(ncols, k -> new Column(nr), (col, k) -> {
-            col.gather(spectrum, stride, k);
-            double kx = k * dkx;
-            boolean nyqX = k == nc / 2;
-            float[] b = col.buf;
-            double[] h = col.h;
-            for (int q = 0; q < nr; q++) {
-                int f = q <= nr / 2 ? q : q - nr;
-                double ky = -f * dky; // row index runs south
-                responseAt(response, kx, ky, nyqX, q == nr / 2, h, col.h2);
-                float re = b[2 * q], im = b[2 * q + 1];
-                b[2 * q] = (float) (re * h[0] - im * h[1]);
-                b[2 * q + 1] = (float) (re * h[1] + im * h[0]);
+        int nblocks = blocks(ncols);
+        parallel(nblocks, t -> new Columns(nr), (block, bi) -> {
+            int k0 = bi * Columns.BLOCK, n = Math.min(Columns.BLOCK, ncols - k0);
+            block.gather(spectrum, stride, k0, n, nr);
+            double[] h = block.h;
+            for (int j = 0; j < n; j++) {
+                int k = k0 + j;
+                double kx = k * dkx;
+                boolean nyqX = k == nc / 2;
+                float[] b = block.buf[j];
+                for (int q = 0; q < nr; q++) {
+                    int f = q <= nr / 2 ? q : q - nr;
+                    double ky = -f * dky; // row index runs south
+                    responseAt(response, kx, ky, nyqX, q == nr / 2, h, block.h2);
+                    float re = b[2 * q], im = b[2 * q + 1];
+                    b[2 * q] = (float) (re * h[0] - im * h[1]);
+                    b[2 * q + 1] = (float) (re * h[1] + im * h[0]);
+                }
+                block.fft.complexInverse(b, true);
             }
-            col.fft.complexInverse(b, true);
-            for (int q = 0; q < rows; q++) {
-                work[q * stride + 2 * k] = b[2 * q];
-                work[q * stride + 2 * k + 1] = b[2 * q + 1];
-            }
-            int n = done.incrementAndGet();
-            if ((n & 63) == 0) {
-                p.report(80.0 * n / ncols);
+            block.scatter(work, stride, k0, n, rows);
+            int d = done.incrementAndGet();
+            if ((d & 7) == 0) {
+                p.report(80.0 * d / nblocks);
             }
         });
         p.checkCanceled();
@@ -237,29 +247,39 @@ public final class GridSpectrum {
         }
     }
 
-    /** Per-thread column workspace. */
-    private static final class Column {
+    /**
+     * Per-thread workspace for a block of spectrum columns: {@value #BLOCK} complex columns are read and
+     * written together, so each cache line fetched along a row serves the whole block.
+     */
+    private static final class Columns {
+        static final int BLOCK = 8;
         final FloatFFT_1D fft;
-        final float[] buf;
+        final float[][] buf;
         final double[] h = new double[2];
         final double[] h2 = new double[2];
 
-        Column(int nr) {
+        Columns(int nr) {
             fft = new FloatFFT_1D(nr);
-            buf = new float[2 * nr];
+            buf = new float[BLOCK][2 * nr];
         }
 
-        void gather(float[] s, int stride, int k) {
-            for (int q = 0, n = buf.length / 2; q < n; q++) {
-                buf[2 * q] = s[q * stride + 2 * k];
-                buf[2 * q + 1] = s[q * stride + 2 * k + 1];
+        void gather(float[] s, int stride, int k0, int n, int nrows) {
+            for (int q = 0; q < nrows; q++) {
+                int off = q * stride + 2 * k0;
+                for (int j = 0; j < n; j++) {
+                    buf[j][2 * q] = s[off + 2 * j];
+                    buf[j][2 * q + 1] = s[off + 2 * j + 1];
+                }
             }
         }
 
-        void scatter(float[] s, int stride, int k, int nrows) {
+        void scatter(float[] s, int stride, int k0, int n, int nrows) {
             for (int q = 0; q < nrows; q++) {
-                s[q * stride + 2 * k] = buf[2 * q];
-                s[q * stride + 2 * k + 1] = buf[2 * q + 1];
+                int off = q * stride + 2 * k0;
+                for (int j = 0; j < n; j++) {
+                    s[off + 2 * j] = buf[j][2 * q];
+                    s[off + 2 * j + 1] = buf[j][2 * q + 1];
+                }
             }
         }
     }

@@ -18,6 +18,9 @@ import picocli.CommandLine.Option;
         subcommands = {
                 ProcessesCommand.class,
                 FilterCommand.class,
+                RunCommand.class,
+                SimulateCommand.class,
+                DetectabilityCommand.class,
         })
 public final class HalyardCli implements Callable<Integer> {
 
