@@ -65,10 +65,11 @@ public final class DipoleFit {
      * @param accept which fits may be returned
      * @return the best fit, or empty when too few samples are near or no start gives an acceptable fit
      */
-    public static Optional<DipoleFitResult> fit(LineSamples samples, FieldDirection field, double x, double y,
+    public static Optional<DipoleFitResult> fit(SampleIndex index, FieldDirection field, double x, double y,
                                                 List<double[]> starts, DipoleFitOptions options, List<Dipole> known,
                                                 java.util.function.Predicate<DipoleFitResult> accept) {
-        int[] idx = samples.near(x, y, options.radiusM());
+        LineSamples samples = index.samples();
+        int[] idx = index.near(x, y, options.radiusM());
         if (idx.length < options.minSamples()) {
             return Optional.empty();
         }
@@ -94,11 +95,12 @@ public final class DipoleFit {
         return best;
     }
 
-    /** {@link #fit(LineSamples, FieldDirection, double, double, List, DipoleFitOptions, List, java.util.function.Predicate)}
+    /** {@link #fit(SampleIndex, FieldDirection, double, double, List, DipoleFitOptions, List, java.util.function.Predicate)}
      *  from one start (x, y, {@code depthBelow} m under the sensors), no known neighbours, any result accepted. */
     public static Optional<DipoleFitResult> fit(LineSamples samples, FieldDirection field, double x, double y,
                                                 double depthBelow, DipoleFitOptions options) {
-        return fit(samples, field, x, y, List.of(new double[] {x, y, depthBelow}), options, List.of(), r -> true);
+        return fit(new SampleIndex(samples, options.radiusM()), field, x, y, List.of(new double[] {x, y, depthBelow}),
+                options, List.of(), r -> true);
     }
 
     private static Optional<DipoleFitResult> optimise(Model model, double[] target, double[] s, double sensorDepth,

@@ -45,7 +45,10 @@ public record LineSamples(double[] x, double[] y, double[] z, double[] anomaly, 
         return x.length;
     }
 
-    /** Indices of the samples within {@code radius} metres (horizontally) of (px, py). */
+    /**
+     * Indices of the samples within {@code radius} metres (horizontally) of (px, py): a linear scan, for
+     * a few queries; {@link SampleIndex} for many.
+     */
     public int[] near(double px, double py, double radius) {
         double r2 = radius * radius;
         return java.util.stream.IntStream.range(0, x.length)

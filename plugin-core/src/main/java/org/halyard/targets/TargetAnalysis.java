@@ -68,13 +68,14 @@ public final class TargetAnalysis {
         }
         GeometryFactory gf = new GeometryFactory();
         List<Target> targets = new ArrayList<>();
+        SampleIndex index = new SampleIndex(in.samples(), o.fit().radiusM());
         List<Dipole> fitted = new ArrayList<>();
         List<Peak> list = peaks.peaks();
         for (int k = 0; k < list.size(); k++) {
             p.slice(40, 100).report(100.0 * k / list.size());
             p.checkCanceled();
             Target t = characterise(k + 1, list.get(k), nearestFeature(list.get(k), features, o.linear(), gf),
-                    in, o, matcher, fitted);
+                    in, index, o, matcher, fitted);
             t.fit().ifPresent(f -> fitted.add(f.dipole()));
             targets.add(t);
         }
@@ -83,19 +84,19 @@ public final class TargetAnalysis {
     }
 
     private static Target characterise(int id, Peak pk, Optional<LinearFeature> feature, TargetInputs in,
-                                       TargetOptions o, AssetMatcher matcher, List<Dipole> fitted) {
+                                       SampleIndex index, TargetOptions o, AssetMatcher matcher, List<Dipole> fitted) {
         boolean linear = feature.isPresent();
         EulerOptions eo = linear ? o.linearEuler() : o.discreteEuler();
         Optional<EulerSolution> euler = linear
                 ? EulerDeconvolution.solveAcross(in.grids(), pk.x(), pk.y(), strikeAt(feature.get().line(), pk.x(), pk.y()), eo)
                 : EulerDeconvolution.solve(in.grids(), pk.x(), pk.y(), eo);
         Optional<DipoleFitResult> fit = linear || in.samples().size() == 0 ? Optional.empty()
-                : fitDipole(pk, euler, in, o, near(fitted, pk, 4 * o.fit().radiusM()));
+                : fitDipole(pk, euler, in, index, o, near(fitted, pk, 4 * o.fit().radiusM()));
         double x = fit.map(f -> f.dipole().x()).orElse(euler.map(EulerSolution::x).orElse(pk.x()));
         double y = fit.map(f -> f.dipole().y()).orElse(euler.map(EulerSolution::y).orElse(pk.y()));
         double depth = fit.map(DipoleFitResult::depthBelowSensor).orElse(euler.map(EulerSolution::depth).orElse(Double.NaN));
         String method = fit.isPresent() ? "dipole-fit" : euler.map(e -> "euler-si" + (int) e.structuralIndex()).orElse("none");
-        int[] near = in.samples().near(x, y, o.fit().radiusM());
+        int[] near = index.near(x, y, o.fit().radiusM());
         Burial burial = Burial.of(in.bathymetry().orElse(null), x, y, depth,
                 LineSamples.medianAt(in.samples().z(), near), LineSamples.medianAt(in.samples().altitude(), near));
         Optional<MassRange> mass = fit.map(f -> o.mass().massRange(f.dipole().moment(), in.fieldIntensityNt()));
@@ -112,14 +113,14 @@ public final class TargetAnalysis {
      * the peak (samples selected around the pick).
      */
     private static Optional<DipoleFitResult> fitDipole(Peak pk, Optional<EulerSolution> euler, TargetInputs in,
-                                                       TargetOptions o, List<Dipole> known) {
+                                                       SampleIndex index, TargetOptions o, List<Dipole> known) {
         List<double[]> starts = new ArrayList<>();
         euler.ifPresent(e -> starts.add(new double[] {e.x(), e.y(), e.depth()}));
         starts.add(new double[] {pk.x(), pk.y(), o.startDepthM()});
         for (double d : START_DEPTHS) {
             starts.add(new double[] {pk.x(), pk.y(), d});
         }
-        return DipoleFit.fit(in.samples(), in.field(), pk.x(), pk.y(), starts, o.fit(), known,
+        return DipoleFit.fit(index, in.field(), pk.x(), pk.y(), starts, o.fit(), known,
                 r -> Math.hypot(r.dipole().x() - pk.x(), r.dipole().y() - pk.y())
                         <= Math.max(1, o.fit().maxShiftFactor() * r.depthBelowSensor()));
     }
