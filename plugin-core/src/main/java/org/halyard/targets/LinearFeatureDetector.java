@@ -22,8 +22,9 @@ import org.locationtech.jts.simplify.DouglasPeuckerSimplifier;
  * <li>ridge cells by the Hessian test of {@link RidgeCells}, above {@code background + k sigma};</li>
  * <li>linking: 8-connected ridge cells whose directions differ by at most {@code maxTurnDeg} form one piece
  *     (union-find);</li>
- * <li>merging: pieces whose principal axes agree, whose ends are within {@code maxGapM} and which lie on
- *     each other's axis (within {@code labelDistanceM}) are joined, repeatedly, bridging gaps left by noise;</li>
+ * <li>merging: pieces whose principal axes agree, whose facing ends are within {@code maxGapM} (or the
+ *     shorter piece's length) and lie on each other's axis (within {@code labelDistanceM}) are joined,
+ *     repeatedly, bridging gaps left by noise or by an object lying on the line;</li>
  * <li>a piece is a feature when it spans at least {@code minLengthM} along its axis and its cells' ridge
  *     directions follow the axis within {@code maxDeviationDeg} on average (this rejects the radial
  *     pattern around compact peaks);</li>

@@ -74,8 +74,8 @@ final class RidgePiece {
     }
 
     /**
-     * Whether {@code other} continues this piece: axes within {@code maxTurnDeg}, a gap of at most
-     * {@code maxGap} between their nearest ends (or overlapping), and each of the two facing ends within
+     * Whether {@code other} continues this piece: axes within {@code maxTurnDeg}, a gap between their nearest
+     * ends of at most {@code maxGap} or the shorter piece's length (or overlapping), and each of the two facing ends within
      * {@code maxOffset} of the other piece's axis.
      */
     boolean continues(RidgePiece other, double maxTurnDeg, double maxGap, double maxOffset) {
@@ -100,7 +100,10 @@ final class RidgePiece {
         double offset = Math.max(across(b[bj], b[bj + 1]), other.across(a[ai], a[ai + 1]));
         boolean overlapping = other.along(a[0], a[1]) * other.along(a[2], a[3]) < 0
                 || along(b[0], b[1]) * along(b[2], b[3]) < 0;
-        return (gap <= maxGap || overlapping) && offset <= maxOffset;
+        // A gap no longer than the shorter piece is bridged too: a strong object lying on a cable hides the
+        // ridge over a few times its depth, and both sides then stay long and collinear.
+        double allowed = Math.max(maxGap, Math.min(length(), other.length()));
+        return (gap <= allowed || overlapping) && offset <= maxOffset;
     }
 
     /** The piece made of this one's cells and {@code other}'s. */

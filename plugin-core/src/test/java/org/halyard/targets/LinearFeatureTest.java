@@ -26,6 +26,8 @@ class LinearFeatureTest {
     static final GeometryFactory GF = new GeometryFactory();
 
     static List<Dipole> discrete;
+    /** A strong object lying on the cable (an anchor on the line). */
+    static final Dipole ON_CABLE = Dipole.along(45, 55, 20.6, 8, SyntheticSurvey.FIELD);
     static double[] cable;
     static double[] pipe;
     static TargetResult result;
@@ -48,7 +50,9 @@ class LinearFeatureTest {
         discrete = List.of(Dipole.along(15, 85, 20.5, 2, SyntheticSurvey.FIELD),
                 Dipole.along(80, 80, 21, 5, SyntheticSurvey.FIELD),
                 Dipole.along(20, 20, 20.3, 1, SyntheticSurvey.FIELD));
-        SyntheticSurvey s = new SyntheticSurvey(discrete, List.of(
+        List<Dipole> sources = new java.util.ArrayList<>(discrete);
+        sources.add(ON_CABLE);
+        SyntheticSurvey s = new SyntheticSurvey(sources, List.of(
                 SyntheticSurvey.line(cable[0], cable[1], cable[2], cable[3], 20.8, 0.3),
                 SyntheticSurvey.line(pipe[0], pipe[1], pipe[2], pipe[3], 21.5, 2.0)), SENSOR_DEPTH);
         GridGeometry geo = new GridGeometry(200, 200, 0, 100, 0.5, "EPSG:32631");
@@ -84,10 +88,20 @@ class LinearFeatureTest {
     void noDiscretePicksAlongTheCable() {
         LineString truth = line(cable, 0);
         List<Target> along = result.targets().stream()
-                .filter(t -> truth.distance(GF.createPoint(new Coordinate(t.x(), t.y()))) < 3).toList();
+                .filter(t -> truth.distance(GF.createPoint(new Coordinate(t.x(), t.y()))) < 3)
+                .filter(t -> Math.hypot(t.x() - ON_CABLE.x(), t.y() - ON_CABLE.y()) > 3).toList();
         System.out.println("picks along the cable: " + along.stream().map(t -> t.targetClass().label()).toList());
         assertThat(along).isNotEmpty();
         assertThat(along).allSatisfy(t -> assertThat(t.targetClass()).isEqualTo(TargetClass.LINEAR)); // issue 5
+    }
+
+    @Test
+    void aStrongObjectOnTheCableStaysDiscrete() {
+        // The dominance rule: a pick far stronger than the ridge it sits on is an object, not the cable.
+        assertThat(result.targets()).anySatisfy(t -> {
+            assertThat(t.targetClass()).isEqualTo(TargetClass.DISCRETE);
+            assertThat(Math.hypot(t.x() - ON_CABLE.x(), t.y() - ON_CABLE.y())).isLessThan(0.5);
+        });
     }
 
     @Test
