@@ -28,10 +28,12 @@ public record LinearFeature(int id, LineString line, double amplitude, double de
         return ((az % 180) + 180) % 180;
     }
 
+    /** The same feature with depth {@code d} below the observation level, m, positive down ({@code NaN} unknown). */
     public LinearFeature withDepth(double d) {
         return new LinearFeature(id, line, amplitude, d, asset);
     }
 
+    /** The same feature with the matched infrastructure id (empty when uncharted). */
     public LinearFeature withAsset(Optional<String> a) {
         return new LinearFeature(id, line, amplitude, depth, a);
     }
