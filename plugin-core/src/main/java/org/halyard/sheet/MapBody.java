@@ -4,7 +4,7 @@ import java.util.List;
 import org.halyard.io.ProjectedCrs;
 
 /**
- * Draws what is inside and around a map frame: rasters, vector lines, sheet footprints, targets, the
+ * Draws what is inside and around a map frame: rasters, vector lines, targets, sheet footprints, the
  * graticule, grid crosses, the neatline and the coordinate ticks.
  */
 final class MapBody {
