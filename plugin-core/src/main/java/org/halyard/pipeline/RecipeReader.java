@@ -13,6 +13,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.halyard.io.GeoTiffGrids;
+import org.halyard.targets.TargetOptions;
 
 /**
  * Reads and checks a recipe (CONTRACT.md). Every problem is reported as one line naming the recipe and
@@ -105,10 +106,11 @@ public final class RecipeReader {
             throw c.error("grid.tension", "must be from 0 to below 1");
         }
         JsonNode t = c.object(root, "targets", false);
+        TargetOptions td = TargetOptions.DEFAULT;
         Recipe.TargetBlock targets = new Recipe.TargetBlock(
-                t == null ? 6 : c.number(t, "threshold_sigma", 6, "targets"),
-                t == null ? 1.5 : c.number(t, "min_separation_m", 1.5, "targets"),
-                t == null ? 5 : c.number(t, "asset_buffer_m", 5, "targets"));
+                t == null ? td.peaks().thresholdFactor() : c.number(t, "threshold_sigma", td.peaks().thresholdFactor(), "targets"),
+                t == null ? td.peaks().minSeparationM() : c.number(t, "min_separation_m", td.peaks().minSeparationM(), "targets"),
+                t == null ? td.assetBufferM() : c.number(t, "asset_buffer_m", td.assetBufferM(), "targets"));
         String name = root.hasNonNull("name") ? root.get("name").asText() : file.getFileName().toString();
         return new Recipe(file, name, crs, survey, base, field, grid, optionalFile(c, dir, root, "bathymetry"),
                 optionalFile(c, dir, root, "infrastructure"), targets);

@@ -22,6 +22,16 @@ final class RunContext {
     Grid eastDerivative, northDerivative, verticalDerivative;
     /** Analytic-signal amplitude of the total-field grid, nT/m. */
     Grid analyticSignal;
+    /** Corrected line samples of every sensor, for the dipole fits. */
+    org.halyard.targets.LineSamples samples = org.halyard.targets.LineSamples.NONE;
+    /** The {@code tracks} layer: one line string per survey line and sensor. */
+    org.halyard.io.FeatureLayer tracks;
+    /** Time of the first survey sample, ms since 1970 (0 when the survey has no times). */
+    long firstSampleMillis;
+    /** The QC checks of the survey for the summary page, or null. */
+    org.halyard.sheet.QcSummary qcSummary;
+    /** The target analysis. */
+    org.halyard.targets.TargetResult targets;
 
     RunContext(Recipe recipe, Path work, RunLog log, RunListener listener) {
         this.recipe = recipe;

@@ -21,6 +21,7 @@ import picocli.CommandLine.Option;
                 RunCommand.class,
                 SimulateCommand.class,
                 DetectabilityCommand.class,
+                SheetCommand.class,
                 GridCommand.class,
         })
 public final class HalyardCli implements Callable<Integer> {
