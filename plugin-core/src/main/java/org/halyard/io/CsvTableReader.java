@@ -187,6 +187,42 @@ public final class CsvTableReader implements Closeable {
         return v;
     }
 
+    /**
+     * Field {@code col} of the current row as an ISO 8601 UTC time in epoch seconds (see {@link IsoTime});
+     * an empty field gives {@code NaN}.
+     *
+     * @throws IllegalArgumentException naming file, line and column when the field is not such a time
+     */
+    public double isoTime(int col) {
+        requireFields(col + 1);
+        int s = trimmedStart(col), e = trimmedEnd(col);
+        if (s >= e) {
+            return Double.NaN;
+        }
+        double t = IsoTime.parse(line, s, e);
+        if (Double.isNaN(t)) {
+            throw new IllegalArgumentException(file + ": line " + lineNumber + ", column '" + header.get(col)
+                    + "': not an ISO 8601 UTC time (like 2026-05-14T09:30:00.100Z): '"
+                    + new String(line, s, Math.min(e - s, 40)) + "'");
+        }
+        return t;
+    }
+
+    /** Whether field {@code col} of the current row, without quotes, equals {@code s}; creates no string. */
+    public boolean textEquals(int col, String s) {
+        requireFields(col + 1);
+        int a = trimmedStart(col), e = trimmedEnd(col);
+        if (e - a != s.length()) {
+            return false;
+        }
+        for (int k = 0; k < s.length(); k++) {
+            if (line[a + k] != s.charAt(k)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private int trimmedStart(int col) {
         int s = starts[col], e = ends[col];
         while (s < e && line[s] == ' ') {
