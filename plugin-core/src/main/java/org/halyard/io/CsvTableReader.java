@@ -174,15 +174,24 @@ public final class CsvTableReader implements Closeable {
      * @throws IllegalArgumentException naming file, line and column when the field is not a number
      */
     public double number(int col) {
+        return parsed(col, FastDecimal::parse, "not a number");
+    }
+
+    /** A char-range parser returning NaN for text it does not accept. */
+    private interface RangeParser {
+        double parse(char[] s, int from, int to);
+    }
+
+    private double parsed(int col, RangeParser parser, String what) {
         requireFields(col + 1);
         int s = trimmedStart(col), e = trimmedEnd(col);
         if (s >= e) {
             return Double.NaN;
         }
-        double v = FastDecimal.parse(line, s, e);
+        double v = parser.parse(line, s, e);
         if (Double.isNaN(v) && !FastDecimal.isNanLiteral(line, s, e)) {
             throw new IllegalArgumentException(file + ": line " + lineNumber + ", column '" + header.get(col)
-                    + "': not a number: '" + new String(line, s, Math.min(e - s, 40)) + "'");
+                    + "': " + what + ": '" + new String(line, s, Math.min(e - s, 40)) + "'");
         }
         return v;
     }
@@ -194,18 +203,7 @@ public final class CsvTableReader implements Closeable {
      * @throws IllegalArgumentException naming file, line and column when the field is not such a time
      */
     public double isoTime(int col) {
-        requireFields(col + 1);
-        int s = trimmedStart(col), e = trimmedEnd(col);
-        if (s >= e) {
-            return Double.NaN;
-        }
-        double t = IsoTime.parse(line, s, e);
-        if (Double.isNaN(t)) {
-            throw new IllegalArgumentException(file + ": line " + lineNumber + ", column '" + header.get(col)
-                    + "': not an ISO 8601 UTC time (like 2026-05-14T09:30:00.100Z): '"
-                    + new String(line, s, Math.min(e - s, 40)) + "'");
-        }
-        return t;
+        return parsed(col, IsoTime::parse, "not an ISO 8601 UTC time (like 2026-05-14T09:30:00.100Z)");
     }
 
     /** Whether field {@code col} of the current row, without quotes, equals {@code s}; creates no string. */

@@ -41,7 +41,7 @@ public final class CrossoverFinder {
             }
             final int line = l;
             int lineEnd = lines.end(l) - 1;
-            LineChunkIndex.forEachChunk(lines, l, c -> ties.query(LineChunkIndex.envelope(x, y, c.from(), c.to()), tc -> {
+            LineChunkIndex.forEachChunk(lines, x, y, l, c -> ties.query(c.envelope(), tc -> {
                 int tieEnd = lines.end(tc.line()) - 1;
                 for (int i = c.from(); i < c.to(); i++) {
                     double ax0 = Math.min(x[i], x[i + 1]), ax1 = Math.max(x[i], x[i + 1]);

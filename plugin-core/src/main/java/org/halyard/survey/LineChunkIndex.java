@@ -18,7 +18,7 @@ final class LineChunkIndex {
     static final int CHUNK = 32;
 
     /** Rows {@code [from, to]} of line {@code line}: the segments (i, i+1) for from &lt;= i &lt; to. */
-    record Chunk(int line, int from, int to) {
+    record Chunk(int line, int from, int to, Envelope envelope) {
     }
 
     private final STRtree tree = new STRtree();
@@ -28,8 +28,8 @@ final class LineChunkIndex {
     LineChunkIndex(SurveyLines lines, double[] x, double[] y, IntPredicate include) {
         for (int l = 0; l < lines.lineCount(); l++) {
             if (include.test(l)) {
-                forEachChunk(lines, l, c -> {
-                    tree.insert(envelope(x, y, c.from, c.to), c);
+                forEachChunk(lines, x, y, l, c -> {
+                    tree.insert(c.envelope(), c);
                     count++;
                 });
             }
@@ -49,11 +49,12 @@ final class LineChunkIndex {
         tree.query(env, item -> visitor.accept((Chunk) item));
     }
 
-    /** The runs of line {@code l}, in order. */
-    static void forEachChunk(SurveyLines lines, int l, Consumer<Chunk> visitor) {
+    /** The runs of line {@code l}, in order, on positions x, y (m). */
+    static void forEachChunk(SurveyLines lines, double[] x, double[] y, int l, Consumer<Chunk> visitor) {
         int s = lines.start(l), e = lines.end(l);
         for (int a = s; a < e - 1; a += CHUNK) {
-            visitor.accept(new Chunk(l, a, Math.min(a + CHUNK, e - 1)));
+            int b = Math.min(a + CHUNK, e - 1);
+            visitor.accept(new Chunk(l, a, b, envelope(x, y, a, b)));
         }
     }
 

@@ -22,7 +22,7 @@ import org.locationtech.jts.geom.Envelope;
 public final class LineSpacing {
 
     /** Search radius in multiples of the spacing limit. */
-    static final double REACH = 4;
+    static final double REACH = 2;
 
     /**
      * Spacing per line.
@@ -77,8 +77,8 @@ public final class LineSpacing {
                 best[0] = Double.POSITIVE_INFINITY;
                 int self = l;
                 index.query(new Envelope(px - reach, px + reach, py - reach, py + reach), c -> {
-                    if (c.line() == self) {
-                        return;
+                    if (c.line() == self || c.envelope().distance(new Envelope(px, px, py, py)) >= best[0]) {
+                        return; // cannot beat the nearest found so far
                     }
                     for (int j = c.from(); j < c.to(); j++) {
                         double d = starboardDistance(px, py, stx, sty, x[j], y[j], x[j + 1], y[j + 1]);
@@ -118,7 +118,7 @@ public final class LineSpacing {
         double u = len2 > 0 ? ((px - ax) * vx + (py - ay) * vy) / len2 : 0;
         u = u < 0 ? 0 : u > 1 ? 1 : u;
         double qx = ax + u * vx - px, qy = ay + u * vy - py;
-        double d = Math.hypot(qx, qy);
+        double d = Math.sqrt(qx * qx + qy * qy);
         // starboard: the offset's across component dominates (within 45 degrees of the starboard normal)
         double across = qx * stx + qy * sty;
         return across > 0 && across >= 0.7071 * d ? d : Double.POSITIVE_INFINITY;

@@ -50,6 +50,8 @@ public final class SurveyProcessing {
         SurveyLines lines = input.lines();
         boolean[] isTie = input.tieMask();
         List<String> messages = new ArrayList<>();
+        java.util.Map<String, Double> stages = new java.util.LinkedHashMap<>();
+        long clock = System.nanoTime();
         int n = lines.size();
         int ns = lines.sensors().size();
         messages.add(String.format(Locale.ROOT, "survey %s: %d lines (%d tie), %d samples, %d sensors",
@@ -58,6 +60,7 @@ public final class SurveyProcessing {
         double[] dist = new double[n];
         float[] heading = new float[n];
         TrackPositioning.compute(lines, options.headingSmoothingM(), dist, heading);
+        clock = lap(stages, "positioning", clock);
         p.report(10);
         p.checkCanceled();
 
@@ -95,6 +98,7 @@ public final class SurveyProcessing {
         } else if (field.isEmpty()) {
             messages.add("no field block and no base station: the field direction is unknown to this stage");
         }
+        clock = lap(stages, "diurnal", clock);
         p.report(25);
         p.checkCanceled();
 
@@ -139,6 +143,7 @@ public final class SurveyProcessing {
                 "%d spikes found and repaired (threshold %.1f MAD sigmas of the fourth difference)%s", spikeCount,
                 options.spikeThresholdSigmas(), spikeList.isEmpty() ? "" : "; first at line " + spikeList.get(0).line()
                         + ", sensor " + spikeList.get(0).sensor() + ", row " + spikeList.get(0).row()));
+        clock = lap(stages, "sensor positions and spikes", clock);
 
         // levelling
         List<Crossover> crossovers = List.of();
@@ -196,6 +201,7 @@ public final class SurveyProcessing {
                         + (unlevelled.size() > 10 ? ", ..." : ""));
             }
         }
+        clock = lap(stages, "levelling", clock);
         p.report(70);
         p.checkCanceled();
 
@@ -210,6 +216,7 @@ public final class SurveyProcessing {
         } else if (ns < 2) {
             messages.add("one sensor: no transverse gradient");
         }
+        clock = lap(stages, "gradients", clock);
         p.report(80);
         p.checkCanceled();
 
@@ -218,9 +225,11 @@ public final class SurveyProcessing {
         double areaOver = Double.NaN;
         if (!Double.isNaN(options.lineSpacingLimitM())) {
             spacing = LineSpacing.compute(lines, dist, heading, isTie, options.lineSpacingLimitM(),
-                    Math.max(1, options.lineSpacingLimitM() / 4));
+                    Math.max(1, options.lineSpacingLimitM() / 2));
             areaOver = spacing.areaOverLimit();
-            messages.add(String.format(Locale.ROOT, "line spacing over %.1f m on %.1f%% of the area between traverse lines",
+            messages.add(Double.isNaN(areaOver)
+                    ? "line spacing not measured: no traverse line has a neighbour within reach"
+                    : String.format(Locale.ROOT, "line spacing over %.1f m on %.1f%% of the area between traverse lines",
                     options.lineSpacingLimitM(), 100 * areaOver));
         }
         List<LineQc> lineQc = LineStatistics.compute(lines, isTie, dist, options, spikesPerLine,
@@ -229,9 +238,16 @@ public final class SurveyProcessing {
         List<TrackFeature> trackFeatures = TrackBuilder.tracks(lines, tracks, lineQc, options.trackToleranceM());
         SurveyQc qc = new SurveyQc(lineQc, spikeList, spikeCount, baseGaps, options.altitudeLimitM(),
                 options.lineSpacingLimitM(), areaOver, outline, outline.getArea(), before, after, datum);
+        lap(stages, "qc and tracks", clock);
         p.report(100);
         return new ProcessedSurvey(lines, isTie, dist, heading, tracks, grads, crossovers, solution, field, qc,
-                trackFeatures, messages);
+                trackFeatures, messages, stages);
+    }
+
+    private static long lap(java.util.Map<String, Double> stages, String name, long since) {
+        long now = System.nanoTime();
+        stages.put(name, (now - since) / 1e9);
+        return now;
     }
 
     /** Mean of the sensors' values per row, NaN where any is missing. */

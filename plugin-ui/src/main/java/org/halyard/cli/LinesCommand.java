@@ -134,6 +134,11 @@ final class LinesCommand implements Callable<Integer> {
                     + "total %.2f s; heap used %.0f MB%n", (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9,
                     (t4 - t3) / 1e9, (t4 - t0) / 1e9,
                     (Runtime.getRuntime().totalMemory() - Runtime.getRuntime().freeMemory()) / 1e6);
+            ps.stageSeconds().forEach((k, v) -> System.err.printf(Locale.ROOT, "timings:   %s %.2f s%n", k, v));
+            System.err.printf(Locale.ROOT, "timings: cpu %.2f s (process)%n",
+                    java.lang.management.ManagementFactory.getRuntimeMXBean() != null
+                            ? ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
+                            .getOperatingSystemMXBean()).getProcessCpuTime() / 1e9 : Double.NaN);
         }
         return 0;
     }
