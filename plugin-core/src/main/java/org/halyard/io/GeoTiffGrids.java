@@ -1,0 +1,285 @@
+package org.halyard.io;
+
+import it.geosolutions.jaiext.range.NoDataContainer;
+import java.awt.image.DataBuffer;
+import java.awt.image.Raster;
+import java.awt.image.RenderedImage;
+import java.awt.image.WritableRaster;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.HashMap;
+import java.util.Map;
+import org.geotools.api.referencing.FactoryException;
+import org.geotools.api.referencing.crs.CoordinateReferenceSystem;
+import org.geotools.api.referencing.crs.GeographicCRS;
+import org.geotools.api.referencing.crs.ProjectedCRS;
+import org.geotools.api.referencing.operation.MathTransform;
+import org.geotools.coverage.GridSampleDimension;
+import org.geotools.coverage.grid.GridCoverage2D;
+import org.geotools.coverage.grid.GridCoverageFactory;
+import org.geotools.coverage.util.CoverageUtilities;
+import org.geotools.gce.geotiff.GeoTiffReader;
+import org.geotools.gce.geotiff.GeoTiffWriter;
+import org.geotools.geometry.jts.ReferencedEnvelope;
+import org.geotools.referencing.CRS;
+import org.geotools.referencing.operation.transform.AffineTransform2D;
+import org.geotools.util.factory.Hints;
+import org.halyard.grid.Grid;
+import org.halyard.grid.GridGeometry;
+
+/**
+ * Reads and writes {@link Grid}s as single-band float32 GeoTIFFs through GeoTools' gt-geotiff, and converts
+ * between {@code Grid} and {@link GridCoverage2D}.
+ *
+ * <p>Written files carry the CRS as EPSG geokeys, the exact pixel-is-area geotransform of the grid and a
+ * nodata value ({@link #NODATA}, in GDAL's nodata tag) where the grid holds {@code NaN}. Read files must
+ * have a projected CRS in metres and square cells; nodata cells become {@code NaN}.
+ *
+ * <p><b>Thread safety:</b> stateless; calls may run concurrently on different files.
+ */
+public final class GeoTiffGrids {
+
+    /** The nodata value written for blank cells: exact in float32 and outside any magnetic value. */
+    public static final float NODATA = -99999f;
+
+    /** Relative tolerance for deciding that cells are square and the grid is not rotated. */
+    private static final double SHAPE_TOLERANCE = 1e-6;
+
+    private GeoTiffGrids() {
+    }
+
+    /**
+     * Reads band 1 of a GeoTIFF.
+     *
+     * @throws IllegalArgumentException naming the file for a missing or unreadable file, a missing or
+     *     geographic CRS, non-square or rotated cells, or a grid with no valid cell
+     */
+    public static Grid read(Path file) {
+        if (!Files.isRegularFile(file)) {
+            throw new IllegalArgumentException(file + ": no such file");
+        }
+        GeoTiffReader reader;
+        try {
+            reader = new GeoTiffReader(file.toFile(), new Hints(Hints.FORCE_LONGITUDE_FIRST_AXIS_ORDER, Boolean.TRUE));
+        } catch (Exception e) {
+            throw new IllegalArgumentException(file + ": not a readable GeoTIFF (" + firstLine(e) + ")");
+        }
+        try {
+            GridCoverage2D coverage;
+            try {
+                coverage = reader.read(null);
+            } catch (Exception e) {
+                throw new IllegalArgumentException(file + ": not a readable GeoTIFF (" + firstLine(e) + ")");
+            }
+            if (coverage == null) {
+                throw new IllegalArgumentException(file + ": not a readable GeoTIFF");
+            }
+            Double nodata = null;
+            if (reader.getMetadata() != null && reader.getMetadata().hasNoData()) {
+                nodata = reader.getMetadata().getNoData();
+            }
+            Grid grid = fromCoverage(coverage, nodata, file.toString());
+            coverage.dispose(true);
+            return grid;
+        } finally {
+            reader.dispose();
+        }
+    }
+
+    /**
+     * Converts a coverage to a grid.
+     *
+     * @param nodata a value to read as blank, or null
+     * @param label  what to name in error messages (a file name or layer name)
+     */
+    public static Grid fromCoverage(GridCoverage2D coverage, Double nodata, String label) {
+        CoordinateReferenceSystem crs = coverage.getCoordinateReferenceSystem2D();
+        if (crs == null || crs instanceof org.geotools.api.referencing.crs.EngineeringCRS
+                || crs.getCoordinateSystem() == null || crs.getName() == null
+                || "Unknown".equalsIgnoreCase(crs.getName().getCode())) {
+            throw new IllegalArgumentException(label + ": the grid has no coordinate reference system");
+        }
+        if (crs instanceof GeographicCRS) {
+            throw new IllegalArgumentException(label + ": the grid is in a geographic CRS (degrees); "
+                    + "Halyard needs a projected CRS in metres: reproject it first, e.g. to the UTM zone");
+        }
+        if (!(crs instanceof ProjectedCRS)) {
+            throw new IllegalArgumentException(label + ": the grid's CRS is not a projected CRS in metres");
+        }
+        MathTransform g2w = coverage.getGridGeometry().getGridToCRS2D(
+                org.geotools.api.metadata.spatial.PixelOrientation.UPPER_LEFT);
+        if (!(g2w instanceof AffineTransform2D a)) {
+            throw new IllegalArgumentException(label + ": the grid's geotransform is not affine");
+        }
+        double sx = a.getScaleX(), sy = a.getScaleY();
+        if (Math.abs(a.getShearX()) > SHAPE_TOLERANCE * Math.abs(sx) || Math.abs(a.getShearY()) > SHAPE_TOLERANCE * Math.abs(sx)) {
+            throw new IllegalArgumentException(label + ": the grid is rotated; resample it north-up first");
+        }
+        if (!(sy < 0)) {
+            throw new IllegalArgumentException(label + ": the grid's rows run north to south in no usual way (y scale "
+                    + sy + "); flip it north-up first");
+        }
+        if (Math.abs(sx + sy) > SHAPE_TOLERANCE * sx) {
+            throw new IllegalArgumentException(label + ": cells are not square (" + sx + " x " + (-sy)
+                    + " m); resample to square cells first");
+        }
+        RenderedImage img = coverage.getRenderedImage();
+        int cols = img.getWidth(), rows = img.getHeight();
+        float[] values = band0(img);
+        int valid = 0;
+        for (int i = 0; i < values.length; i++) {
+            float v = values[i];
+            if (Float.isInfinite(v) || (nodata != null && (v == nodata.floatValue() || (nodata.isNaN() && Float.isNaN(v))))) {
+                values[i] = Float.NaN;
+            } else if (!Float.isNaN(v)) {
+                valid++;
+            }
+        }
+        if (valid == 0) {
+            throw new IllegalArgumentException(label + ": every cell of the grid is blank");
+        }
+        GridGeometry geometry = new GridGeometry(cols, rows, a.getTranslateX(), a.getTranslateY(), sx, codeOf(crs));
+        return Grid.wrap(geometry, values);
+    }
+
+    /**
+     * Writes a grid as a float32 GeoTIFF. The file is written beside the target under a temporary name and
+     * moved into place, so a failed write leaves no partial file.
+     *
+     * @throws IllegalArgumentException when the grid has no CRS code or the code is unknown
+     */
+    public static void write(Grid grid, Path file) {
+        GridCoverage2D coverage = toCoverage(grid, file.getFileName().toString().replaceFirst("\\.tiff?$", ""));
+        Path tmp = file.resolveSibling("." + file.getFileName() + ".part");
+        try {
+            if (file.getParent() != null) {
+                Files.createDirectories(file.getParent());
+            }
+            GeoTiffWriter writer = new GeoTiffWriter(tmp.toFile());
+            try {
+                writer.write(coverage, null);
+            } finally {
+                writer.dispose();
+                coverage.dispose(true);
+            }
+            Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+        } catch (IOException e) {
+            try {
+                Files.deleteIfExists(tmp);
+            } catch (IOException ignored) {
+                // the original failure is the one to report
+            }
+            throw new UncheckedIOException(file + ": cannot write GeoTIFF: " + e.getMessage(), e);
+        }
+    }
+
+    /** Converts a grid to a coverage with {@link #NODATA} in place of blanks and the nodata property set. */
+    public static GridCoverage2D toCoverage(Grid grid, String name) {
+        GridGeometry g = grid.geometry();
+        CoordinateReferenceSystem crs = decode(g.crsCode());
+        float[] v = grid.toArray();
+        for (int i = 0; i < v.length; i++) {
+            if (Float.isNaN(v[i])) {
+                v[i] = NODATA;
+            }
+        }
+        // A plain pixel-interleaved raster over our own array: no copy, and the TIFF writer's fast path.
+        WritableRaster raster = Raster.createWritableRaster(new java.awt.image.PixelInterleavedSampleModel(
+                DataBuffer.TYPE_FLOAT, g.columns(), g.rows(), 1, g.columns(), new int[] {0}),
+                new java.awt.image.DataBufferFloat(v, v.length), null);
+        ReferencedEnvelope env = new ReferencedEnvelope(g.west(), g.east(), g.south(), g.north(), crs);
+        Map<String, Object> props = new HashMap<>();
+        CoverageUtilities.setNoDataProperty(props, new NoDataContainer(NODATA));
+        GridCoverageFactory factory = new GridCoverageFactory();
+        java.awt.image.ColorModel cm = new java.awt.image.ComponentColorModel(
+                java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_GRAY), false, false,
+                java.awt.Transparency.OPAQUE, DataBuffer.TYPE_FLOAT);
+        java.awt.image.BufferedImage image = new java.awt.image.BufferedImage(cm, raster, false, null);
+        return factory.create(name, image, env, (GridSampleDimension[]) null, null, props);
+    }
+
+    /**
+     * The CRS for an authority code such as {@code EPSG:32631}, easting first.
+     *
+     * @throws IllegalArgumentException for a missing or unknown code
+     */
+    public static CoordinateReferenceSystem decode(String code) {
+        if (code == null || code.isBlank()) {
+            throw new IllegalArgumentException("the grid has no CRS code; give one, e.g. --crs EPSG:32631");
+        }
+        try {
+            return CRS.decode(code.trim(), true);
+        } catch (FactoryException e) {
+            throw new IllegalArgumentException("unknown CRS code '" + code + "' (expected e.g. EPSG:32631)");
+        }
+    }
+
+    /** The authority code of a CRS, {@code EPSG:n} where one is found, else its WKT name. */
+    public static String codeOf(CoordinateReferenceSystem crs) {
+        try {
+            // Identifiers first: the full scan of the EPSG database costs seconds.
+            Integer epsg = CRS.lookupEpsgCode(crs, false);
+            if (epsg == null) {
+                epsg = CRS.lookupEpsgCode(crs, true);
+            }
+            if (epsg != null) {
+                return "EPSG:" + epsg;
+            }
+        } catch (FactoryException ignored) {
+            // fall back on the error below
+        }
+        throw new IllegalArgumentException("the grid's CRS '" + crs.getName().getCode()
+                + "' has no EPSG code; Halyard needs an EPSG-coded projected CRS");
+    }
+
+    /** Band 0 of an image as floats, row-major, copied tile by tile (directly where the layout allows). */
+    static float[] band0(RenderedImage img) {
+        int w = img.getWidth(), h = img.getHeight(), x0 = img.getMinX(), y0 = img.getMinY();
+        float[] out = new float[w * h];
+        for (int ty = img.getMinTileY(); ty < img.getMinTileY() + img.getNumYTiles(); ty++) {
+            for (int tx = img.getMinTileX(); tx < img.getMinTileX() + img.getNumXTiles(); tx++) {
+                Raster t = img.getTile(tx, ty);
+                java.awt.Rectangle r = t.getBounds().intersection(new java.awt.Rectangle(x0, y0, w, h));
+                if (r.isEmpty()) {
+                    continue;
+                }
+                if (t.getSampleModel() instanceof java.awt.image.ComponentSampleModel sm
+                        && t.getDataBuffer() instanceof java.awt.image.DataBufferFloat db) {
+                    float[] data = db.getData(sm.getBankIndices()[0]);
+                    int ps = sm.getPixelStride(), ss = sm.getScanlineStride();
+                    int base = db.getOffsets()[sm.getBankIndices()[0]] + sm.getBandOffsets()[0];
+                    int tminX = t.getMinX() - t.getSampleModelTranslateX(), tminY = t.getMinY() - t.getSampleModelTranslateY();
+                    for (int y = r.y; y < r.y + r.height; y++) {
+                        int src = base + (y - t.getMinY() + tminY) * ss + (r.x - t.getMinX() + tminX) * ps;
+                        int dst = (y - y0) * w + (r.x - x0);
+                        if (ps == 1) {
+                            System.arraycopy(data, src, out, dst, r.width);
+                        } else {
+                            for (int x = 0; x < r.width; x++) {
+                                out[dst + x] = data[src + x * ps];
+                            }
+                        }
+                    }
+                } else {
+                    float[] row = new float[r.width * r.height];
+                    t.getSamples(r.x, r.y, r.width, r.height, 0, row);
+                    for (int y = 0; y < r.height; y++) {
+                        System.arraycopy(row, y * r.width, out, (r.y - y0 + y) * w + (r.x - x0), r.width);
+                    }
+                }
+            }
+        }
+        return out;
+    }
+
+    private static String firstLine(Exception e) {
+        String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+        int nl = m.indexOf('\n');
+        return nl < 0 ? m : m.substring(0, nl);
+    }
+
+}

@@ -1,0 +1,116 @@
+package org.halyard.io;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.halyard.grid.Grid;
+import org.halyard.grid.GridGeometry;
+import org.halyard.testing.ExternalTools;
+import org.junit.jupiter.api.Tag;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class GeoTiffGridsTest {
+
+    @TempDir
+    Path dir;
+
+    private static Grid sample() {
+        GridGeometry g = new GridGeometry(7, 5, 500123.25, 5800456.5, 0.25, "EPSG:32631");
+        Grid grid = Grid.sample(g, (x, y) -> (x - 500123) * 3 + (y - 5800455) * 0.5);
+        float[] v = grid.toArray();
+        v[g.index(2, 3)] = Float.NaN;
+        return Grid.of(g, v);
+    }
+
+    @Test
+    void roundTripKeepsValuesBlanksGeometryAndCrs() throws IOException {
+        Grid grid = sample();
+        Path f = dir.resolve("a.tif");
+        GeoTiffGrids.write(grid, f);
+        Grid back = GeoTiffGrids.read(f);
+        assertThat(back.geometry()).isEqualTo(grid.geometry());
+        assertThat(back.toArray()).containsExactly(grid.toArray());
+        assertThat(Files.list(dir).map(p -> p.getFileName().toString())).containsExactly("a.tif");
+    }
+
+    @Test
+    @Tag("external")
+    void gdalSeesEpsgGeotransformAndNodataAsWritten() throws IOException {
+        ExternalTools.require("gdalinfo");
+        Path f = dir.resolve("b.tif");
+        GeoTiffGrids.write(sample(), f);
+        // Reference: GDAL's own reading of the file (gdalinfo -json).
+        JsonNode info = new ObjectMapper().readTree(
+                ExternalTools.run(List.of("gdalinfo", "-json", f.toString()), null).orFail());
+        JsonNode gt = info.get("geoTransform");
+        assertThat(gt.get(0).asDouble()).isEqualTo(500123.25);
+        assertThat(gt.get(1).asDouble()).isEqualTo(0.25);
+        assertThat(gt.get(2).asDouble()).isEqualTo(0.0);
+        assertThat(gt.get(3).asDouble()).isEqualTo(5800456.5);
+        assertThat(gt.get(4).asDouble()).isEqualTo(0.0);
+        assertThat(gt.get(5).asDouble()).isEqualTo(-0.25);
+        JsonNode band = info.get("bands").get(0);
+        assertThat(band.get("type").asText()).isEqualTo("Float32");
+        assertThat(band.get("noDataValue").asDouble()).isEqualTo(GeoTiffGrids.NODATA);
+        String wkt = info.get("coordinateSystem").get("wkt").asText();
+        assertThat(wkt).contains("ID[\"EPSG\",32631]").contains("UTM zone 31N");
+        assertThat(info.get("size").get(0).asInt()).isEqualTo(7);
+        assertThat(info.get("size").get(1).asInt()).isEqualTo(5);
+        // The value GDAL reads at a cell matches what we wrote (gdallocationinfo, pixel 4 line 1).
+        String loc = ExternalTools.run(List.of("gdallocationinfo", "-valonly", f.toString(), "4", "1"), null).orFail();
+        assertThat(Double.parseDouble(loc.trim())).isCloseTo(sample().get(4, 1), org.assertj.core.data.Offset.offset(1e-4));
+    }
+
+    @Test
+    @Tag("external")
+    void readsGridWrittenByGdal() throws IOException {
+        ExternalTools.require("gdal_translate");
+        Path asc = dir.resolve("g.asc");
+        Files.writeString(asc, "ncols 3\nnrows 2\nxllcorner 400000\nyllcorner 6000000\ncellsize 2\n"
+                + "NODATA_value -9999\n1 2 3\n4 -9999 6\n");
+        Path tif = dir.resolve("g.tif");
+        ExternalTools.run(List.of("gdal_translate", "-q", "-a_srs", "EPSG:32630", "-ot", "Float32",
+                asc.toString(), tif.toString()), null).orFail();
+        Grid g = GeoTiffGrids.read(tif);
+        // ESRI ASCII grid: first data row is the north row, xllcorner/yllcorner the outer lower-left corner.
+        assertThat(g.geometry()).isEqualTo(new GridGeometry(3, 2, 400000, 6000004, 2, "EPSG:32630"));
+        assertThat(g.get(0, 0)).isEqualTo(1f);
+        assertThat(g.get(2, 1)).isEqualTo(6f);
+        assertThat(g.get(1, 1)).isNaN();
+    }
+
+    @Test
+    @Tag("external")
+    void refusesDegreesMissingCrsAndBlankGrids() throws IOException {
+        ExternalTools.require("gdal_translate");
+        Path asc = dir.resolve("d.asc");
+        Files.writeString(asc, "ncols 2\nnrows 2\nxllcorner 2\nyllcorner 51\ncellsize 0.001\n"
+                + "NODATA_value -9999\n1 2\n3 4\n");
+        Path deg = dir.resolve("deg.tif");
+        ExternalTools.run(List.of("gdal_translate", "-q", "-a_srs", "EPSG:4326", asc.toString(), deg.toString()), null).orFail();
+        assertThatThrownBy(() -> GeoTiffGrids.read(deg)).hasMessageContaining("geographic CRS");
+        Path nocrs = dir.resolve("nocrs.tif");
+        ExternalTools.run(List.of("gdal_translate", "-q", asc.toString(), nocrs.toString()), null).orFail();
+        assertThatThrownBy(() -> GeoTiffGrids.read(nocrs)).hasMessageContaining("coordinate reference system");
+        Files.writeString(asc, "ncols 2\nnrows 1\nxllcorner 400000\nyllcorner 6000000\ncellsize 1\n"
+                + "NODATA_value -9999\n-9999 -9999\n");
+        Path blank = dir.resolve("blank.tif");
+        ExternalTools.run(List.of("gdal_translate", "-q", "-a_srs", "EPSG:32631", asc.toString(), blank.toString()), null).orFail();
+        assertThatThrownBy(() -> GeoTiffGrids.read(blank)).hasMessageContaining("blank");
+    }
+
+    @Test
+    void refusesMissingAndNonTiffFiles() throws IOException {
+        assertThatThrownBy(() -> GeoTiffGrids.read(dir.resolve("none.tif"))).hasMessageContaining("no such file");
+        Path txt = dir.resolve("x.tif");
+        Files.writeString(txt, "this is not a tiff");
+        assertThatThrownBy(() -> GeoTiffGrids.read(txt)).hasMessageContaining("not a readable GeoTIFF");
+    }
+}
