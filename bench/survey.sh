@@ -18,4 +18,4 @@ ties=T01,T02,T03,T04,T05,T06,T07,T08,T09,T10
 /usr/bin/time -v java -Xmx2g -jar "$root/plugin-ui/target/halyard.jar" lines "$work/lines.csv" --out "$work/out" \
   --crs EPSG:32631 --sensor mag_port:-0.75 --sensor mag_stbd:0.75 --altitude altitude --depth depth \
   --tie "$ties" --base "$work/base.iaga2002" --spacing-limit 6 --altitude-limit 3 --timings \
-  2> >(grep -E "timings|Maximum resident|Elapsed|error" >&2)
+  2> >(grep -iE "timings|Maximum resident|Elapsed|error|exception" >&2)

@@ -49,28 +49,29 @@ public final class PairGradient {
                     + ": along offsets differ; a transverse gradient needs both sensors abreast");
         }
         int n = lines.size();
+        // gx holds the transverse and gy the along gradient until the rotation at the end
         double[] x = new double[n], y = new double[n], m = new double[n], gx = new double[n], gy = new double[n];
-        float[] gt = new float[n], ga = new float[n];
         double[] vp = port.value(), vs = stbd.value();
         for (int i = 0; i < n; i++) {
             x[i] = 0.5 * (port.x()[i] + stbd.x()[i]);
             y[i] = 0.5 * (port.y()[i] + stbd.y()[i]);
             m[i] = 0.5 * (vp[i] + vs[i]);
-            gt[i] = (float) ((vs[i] - vp[i]) / sep);
+            gx[i] = (vs[i] - vp[i]) / sep;
         }
         for (int l = 0; l < lines.lineCount(); l++) {
             int s = lines.start(l), e = lines.end(l);
             for (int i = s; i < e; i++) {
-                ga[i] = (float) slope(distanceM, m, Math.max(s, i - HALF_WINDOW), Math.min(e - 1, i + HALF_WINDOW));
+                gy[i] = slope(distanceM, m, Math.max(s, i - HALF_WINDOW), Math.min(e - 1, i + HALF_WINDOW));
             }
         }
         for (int i = 0; i < n; i++) {
             double h = Math.toRadians(headingDeg[i]);
             double sh = Math.sin(h), ch = Math.cos(h);
-            gx[i] = ga[i] * sh + gt[i] * ch;
-            gy[i] = ga[i] * ch - gt[i] * sh;
+            double gt = gx[i], ga = gy[i];
+            gx[i] = ga * sh + gt * ch;
+            gy[i] = ga * ch - gt * sh;
         }
-        return new GradientPoints(port.spec().column() + "/" + stbd.spec().column(), x, y, m, gx, gy, gt, ga);
+        return new GradientPoints(port.spec().column() + "/" + stbd.spec().column(), x, y, m, gx, gy);
     }
 
     /** Least-squares slope of v against d over rows [a, b]; NaN if any value is missing or d is constant. */

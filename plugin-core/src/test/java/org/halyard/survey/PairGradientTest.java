@@ -92,7 +92,7 @@ class PairGradientTest {
                 maxA3 = Math.max(maxA3, Math.abs(third(g.x()[i] + 4 * q * 0.2 * ux, g.y()[i] + 4 * q * 0.2 * uy, ux, uy)));
             }
             double tolT = s * s / 24 * maxT3 * 1.05 + 1e-4;
-            assertThat((double) g.transverse()[i]).as("transverse gradient at %d", i)
+            assertThat(g.transverse(i, ps.headingDeg()[i])).as("transverse gradient at %d", i)
                     .isCloseTo(trueT, org.assertj.core.data.Offset.offset(tolT));
             // along: 5-point least-squares slope, error h^2 * (sum k^4 / sum k^2) / 6 f''' = 0.567 h^2 f'''
             // plus the pair mean differing from the midpoint field by (s/2)^2/2 T_tt (Taylor), whose
@@ -100,7 +100,7 @@ class PairGradientTest {
             double tolA = 0.567 * 0.2 * 0.2 * maxA3 * 1.05
                     + s * s / 8 * Math.abs(mixed(g.x()[i], g.y()[i], ux, uy, stx, sty)) * 1.05 + 1e-4;
             double trueA = a[0] * ux + a[1] * uy;
-            assertThat((double) g.along()[i]).isCloseTo(trueA, org.assertj.core.data.Offset.offset(tolA));
+            assertThat(g.along(i, ps.headingDeg()[i])).isCloseTo(trueA, org.assertj.core.data.Offset.offset(tolA));
             // rotated to map axes
             assertThat(g.gx()[i]).isCloseTo(a[0], org.assertj.core.data.Offset.offset(tolT + tolA));
             assertThat(g.gy()[i]).isCloseTo(a[1], org.assertj.core.data.Offset.offset(tolT + tolA));
@@ -118,11 +118,12 @@ class PairGradientTest {
             List<SyntheticLines.Spec> specs = List.of(new SyntheticLines.Spec("L1", 104.0, 20, 104.0, 80));
             SurveyLines lines = SyntheticLines.build(specs, 2.0, 0.1, 1.78e9, new double[] {-s / 2, s / 2},
                     (x, y, t) -> D.totalField(x, y, 0, F), null);
-            GradientPoints g = SurveyProcessing.run(new SurveyInput(lines, Set.of()),
-                    SurveyOptions.defaults().withCleaning(0, 10), null, null).gradients().get(0);
+            ProcessedSurvey ps = SurveyProcessing.run(new SurveyInput(lines, Set.of()),
+                    SurveyOptions.defaults().withCleaning(0, 10), null, null);
+            GradientPoints g = ps.gradients().get(0);
             for (int i = 0; i < g.size(); i++) {
                 double[] a = analyticGradient(g.x()[i], g.y()[i], 0);
-                err[k] = Math.max(err[k], Math.abs(g.transverse()[i] - a[0])); // heading north: starboard = east
+                err[k] = Math.max(err[k], Math.abs(g.transverse(i, ps.headingDeg()[i]) - a[0])); // heading north: starboard = east
             }
         }
         assertThat(err[0] / err[1]).isBetween(3.5, 4.5);
