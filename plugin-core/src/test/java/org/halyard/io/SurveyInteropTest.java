@@ -68,5 +68,16 @@ class SurveyInteropTest {
         assertThat(ps.gradients()).hasSize(1);
         assertThat(ps.tracks()).hasSize(56 * 2);
         assertThat(ps.qc().coverageAreaM2()).isPositive();
+
+        // the tracks layer through the GeoPackage writer of the simulate branch, read back
+        Path gpkg = dir.resolve("halyard.gpkg");
+        GeoPackageWriter.write(gpkg, List.of(TrackLayer.of(ps.tracks(), "EPSG:32631")), java.time.Instant.EPOCH);
+        FeatureLayer back = GeoPackageReader.read(gpkg, "tracks");
+        assertThat(back.features()).hasSize(ps.tracks().size());
+        FeatureLayer.Feature f0 = back.features().get(0);
+        assertThat(f0.attributes().get("line")).isEqualTo(ps.tracks().get(0).line());
+        assertThat(f0.geometry().getNumPoints()).isEqualTo(ps.tracks().get(0).geometry().getNumPoints());
+        assertThat(((Number) f0.attributes().get("length_m")).doubleValue())
+                .isCloseTo(ps.tracks().get(0).qc().lengthM(), within(1e-9));
     }
 }
