@@ -116,15 +116,20 @@ public final class QcReportWriter {
             ox[i] = c[i].x;
             oy[i] = c[i].y;
         }
-        p.polyline(ox, oy, 0, c.length, 1, OUTLINE, 1.5f);
         SurveyLines lines = s.lines();
-        for (int l = 0; l < lines.lineCount(); l++) {
-            int a = lines.start(l), b = lines.end(l);
-            int step = Math.max(1, (b - a) / 400);
-            for (SensorTrack st : s.sensors()) {
-                p.polyline(st.x(), st.y(), a, b, step, s.tieMask()[l] ? TIE : TRAVERSE, 0.8f);
+        for (boolean ties : new boolean[] {false, true}) { // ties over traverses, outline on top
+            for (int l = 0; l < lines.lineCount(); l++) {
+                if (s.tieMask()[l] != ties) {
+                    continue;
+                }
+                int a = lines.start(l), b = lines.end(l);
+                int step = Math.max(1, (b - a) / 400);
+                for (SensorTrack st : s.sensors()) {
+                    p.polyline(st.x(), st.y(), a, b, step, ties ? TIE : TRAVERSE, 0.8f);
+                }
             }
         }
+        p.polyline(ox, oy, 0, c.length, 1, OUTLINE, 1.5f);
         for (SpikeAt sp : s.qc().spikes()) {
             p.point(sp.x(), sp.y(), Color.ORANGE);
         }
