@@ -18,7 +18,7 @@ import java.util.Optional;
  * @param qc          QC summary
  * @param tracks      track features (one per line and sensor) for the {@code tracks} layer
  * @param messages    what the run did, skipped or assumed, one sentence each
- * @param stageSeconds wall-clock seconds per stage, in order (for benchmarks and the log)
+ * @param stageSeconds CPU seconds of the calling thread per stage, in order (for benchmarks and the log)
  */
 public record ProcessedSurvey(SurveyLines lines, boolean[] tieMask, double[] distanceM, float[] headingDeg,
                               List<SensorTrack> sensors, List<GradientPoints> gradients, List<Crossover> crossovers,

@@ -108,12 +108,15 @@ final class LinesCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         long t0 = System.nanoTime();
+        var threads = java.lang.management.ManagementFactory.getThreadMXBean();
+        long c0 = threads.getCurrentThreadCpuTime();
         SurveyColumns cols = new SurveyColumns(line, "-".equals(time) ? Optional.empty() : Optional.of(time),
                 lat != null ? Optional.empty() : Optional.of(x), lat != null ? Optional.empty() : Optional.of(y),
                 Optional.ofNullable(lat), Optional.ofNullable(lon), Optional.ofNullable(altitude),
                 Optional.ofNullable(depth), parseSensors(sensors));
         SurveyLines data = SurveyCsvReader.read(file, cols, crs, null);
         long t1 = System.nanoTime();
+        long c1 = threads.getCurrentThreadCpuTime();
         BaseStation bs = base != null ? Iaga2002Reader.read(base) : null;
         Set<String> tieSet = new LinkedHashSet<>(ties);
         SurveyOptions opt = SurveyOptions.defaults()
@@ -134,7 +137,8 @@ final class LinesCommand implements Callable<Integer> {
                     + "total %.2f s; heap used %.0f MB%n", (t1 - t0) / 1e9, (t2 - t1) / 1e9, (t3 - t2) / 1e9,
                     (t4 - t3) / 1e9, (t4 - t0) / 1e9,
                     (Runtime.getRuntime().totalMemory() - Runtime.getRuntime().freeMemory()) / 1e6);
-            ps.stageSeconds().forEach((k, v) -> System.err.printf(Locale.ROOT, "timings:   %s %.2f s%n", k, v));
+            System.err.printf(Locale.ROOT, "timings: cpu of the main thread: import %.2f s%n", (c1 - c0) / 1e9);
+            ps.stageSeconds().forEach((k, v) -> System.err.printf(Locale.ROOT, "timings: cpu of the main thread: %s %.2f s%n", k, v));
             System.err.printf(Locale.ROOT, "timings: cpu %.2f s (process)%n",
                     java.lang.management.ManagementFactory.getRuntimeMXBean() != null
                             ? ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
