@@ -18,6 +18,7 @@ import picocli.CommandLine.Option;
         subcommands = {
                 ProcessesCommand.class,
                 FilterCommand.class,
+                RunCommand.class,
                 SimulateCommand.class,
                 DetectabilityCommand.class,
                 LinesCommand.class,
