@@ -45,6 +45,27 @@ public record SurveyColumns(String line, Optional<String> time, Optional<String>
                 sensors);
     }
 
+    /**
+     * The mapping of a recipe's {@code survey.columns} object: keys {@code line}, {@code time}, {@code x},
+     * {@code y}, {@code altitude}, {@code depth}, {@code latitude}, {@code longitude} (all but {@code line}
+     * optional), values the CSV column names.
+     *
+     * @throws IllegalArgumentException for an unknown key, naming the keys allowed
+     */
+    public static SurveyColumns fromRecipe(java.util.Map<String, String> columns, List<SensorSpec> sensors) {
+        java.util.Set<String> known = java.util.Set.of("line", "time", "x", "y", "altitude", "depth", "latitude",
+                "longitude");
+        for (String k : columns.keySet()) {
+            if (!known.contains(k)) {
+                throw new IllegalArgumentException("recipe survey.columns: unknown key '" + k + "'; allowed: line, time, "
+                        + "x, y, altitude, depth, latitude, longitude");
+            }
+        }
+        java.util.function.Function<String, Optional<String>> get = k -> Optional.ofNullable(columns.get(k));
+        return new SurveyColumns(columns.get("line"), get.apply("time"), get.apply("x"), get.apply("y"),
+                get.apply("latitude"), get.apply("longitude"), get.apply("altitude"), get.apply("depth"), sensors);
+    }
+
     /** Whether positions come as latitude/longitude to be projected. */
     public boolean geographic() {
         return x.isEmpty() || y.isEmpty();
