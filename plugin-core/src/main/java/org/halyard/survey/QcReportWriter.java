@@ -182,7 +182,8 @@ public final class QcReportWriter {
         p.write(file);
     }
 
-    static void deleteTree(Path p) throws IOException {
+    /** Deletes {@code p} and everything below it; nothing when it does not exist. */
+    public static void deleteTree(Path p) throws IOException {
         if (!Files.exists(p)) {
             return;
         }

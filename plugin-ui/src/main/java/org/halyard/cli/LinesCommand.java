@@ -126,10 +126,20 @@ final class LinesCommand implements Callable<Integer> {
                 .withCleaning(spikeSigmas, SurveyOptions.defaults().headingSmoothingM());
         ProcessedSurvey ps = SurveyProcessing.run(new SurveyInput(data, tieSet), opt, bs, null);
         long t2 = System.nanoTime();
-        LineDataCsvWriter.write(ps, out.resolve("lines_processed.csv"), null);
-        long t3 = System.nanoTime();
-        QcReportWriter.write(ps, out.resolve("report"));
-        long t4 = System.nanoTime();
+        // both outputs go to a staging folder first, so a failure leaves neither (no partial output)
+        Path stage = out.resolve(".lines.partial");
+        long t3, t4;
+        try {
+            LineDataCsvWriter.write(ps, stage.resolve("lines_processed.csv"), null);
+            t3 = System.nanoTime();
+            QcReportWriter.write(ps, stage.resolve("report"));
+            t4 = System.nanoTime();
+            publish(stage, out);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(out + ": cannot write outputs: " + e.getMessage(), e);
+        } finally {
+            deleteQuietly(stage);
+        }
         ps.messages().forEach(m -> System.out.println(m));
         System.out.println("wrote " + out.resolve("lines_processed.csv") + " and " + out.resolve("report/qc.html"));
         if (timings) {
@@ -145,6 +155,22 @@ final class LinesCommand implements Callable<Integer> {
                             .getOperatingSystemMXBean()).getProcessCpuTime() / 1e9 : Double.NaN);
         }
         return 0;
+    }
+
+    private static void publish(Path stage, Path out) throws java.io.IOException {
+        Path csv = out.resolve("lines_processed.csv"), report = out.resolve("report");
+        QcReportWriter.deleteTree(report);
+        java.nio.file.Files.move(stage.resolve("lines_processed.csv"), csv, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
+                java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+        java.nio.file.Files.move(stage.resolve("report"), report, java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+    }
+
+    private static void deleteQuietly(Path p) {
+        try {
+            QcReportWriter.deleteTree(p);
+        } catch (java.io.IOException ignored) {
+            // the original outcome is the one to report
+        }
     }
 
     static List<SensorSpec> parseSensors(List<String> specs) {
