@@ -28,6 +28,8 @@ final class RunContext {
     org.halyard.io.FeatureLayer tracks;
     /** Time of the first survey sample, ms since 1970 (0 when the survey has no times). */
     long firstSampleMillis;
+    /** The QC checks of the survey for the summary page, or null. */
+    org.halyard.sheet.QcSummary qcSummary;
     /** The target analysis. */
     org.halyard.targets.TargetResult targets;
 

@@ -22,6 +22,7 @@ import picocli.CommandLine.Option;
                 SimulateCommand.class,
                 DetectabilityCommand.class,
                 LinesCommand.class,
+                SheetCommand.class,
         })
 public final class HalyardCli implements Callable<Integer> {
 
