@@ -1,7 +1,6 @@
 package org.halyard.io;
 
 import org.geotools.api.referencing.FactoryException;
-import org.geotools.api.referencing.NoSuchAuthorityCodeException;
 import org.geotools.api.referencing.crs.CoordinateReferenceSystem;
 import org.geotools.api.referencing.crs.ProjectedCRS;
 import org.geotools.api.referencing.operation.MathTransform;
@@ -9,8 +8,9 @@ import org.geotools.api.referencing.operation.TransformException;
 import org.geotools.referencing.CRS;
 
 /**
- * WGS 84 longitude/latitude to a projected CRS, in place on plain arrays, through GeoTools referencing
- * ({@code CRS.findMathTransform}).
+ * WGS 84 longitude/latitude to a projected CRS, in place on plain arrays of millions of points, through
+ * GeoTools referencing ({@code CRS.findMathTransform}) in chunks; {@link CrsTransforms} is the one-point
+ * form for everything else.
  *
  * <p><b>Accuracy:</b> that of the GeoTools projection (millimetres for UTM); no datum shift is applied
  * beyond what GeoTools finds between WGS 84 and the target datum (lenient: none when no Bursa-Wolf
@@ -26,18 +26,13 @@ public final class CrsTransform {
     }
 
     /**
-     * Decodes a CRS code such as {@code EPSG:32631}, axis order easting/northing (longitude first).
+     * Decodes a CRS code such as {@code EPSG:32631}, axis order easting/northing (longitude first); the one
+     * decoder of the package, {@link GeoTiffGrids#decode}.
      *
      * @throws IllegalArgumentException naming the code when it is unknown
      */
     public static CoordinateReferenceSystem decode(String code) {
-        try {
-            return CRS.decode(code, true);
-        } catch (NoSuchAuthorityCodeException e) {
-            throw new IllegalArgumentException("CRS code '" + code + "' does not exist (expected e.g. EPSG:32631)");
-        } catch (FactoryException e) {
-            throw new IllegalArgumentException("CRS code '" + code + "' cannot be decoded: " + e.getMessage(), e);
-        }
+        return GeoTiffGrids.decode(code);
     }
 
     /**
@@ -62,7 +57,7 @@ public final class CrsTransform {
         requireProjected(code);
         MathTransform mt;
         try {
-            mt = CRS.findMathTransform(CRS.decode("EPSG:4326", true), decode(code), true);
+            mt = CRS.findMathTransform(decode(CrsTransforms.WGS84), decode(code), true);
         } catch (FactoryException e) {
             throw new IllegalArgumentException("no transformation from WGS 84 to " + code + ": " + e.getMessage(), e);
         }

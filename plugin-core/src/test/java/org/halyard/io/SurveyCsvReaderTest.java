@@ -92,7 +92,7 @@ class SurveyCsvReaderTest {
                 + "L1,14/05/2026 09:30,500000.2,6100000.0,2.5,20.1,49000.1,49000.5\n"), COLS, "EPSG:32631", null))
                 .hasMessageContaining("line 3").hasMessageContaining("not an ISO 8601");
         assertThatThrownBy(() -> SurveyCsvReader.read(write(HEADER + row1), COLS, "EPSG:99999999", null))
-                .hasMessageContaining("EPSG:99999999").hasMessageContaining("does not exist");
+                .hasMessageContaining("EPSG:99999999").hasMessageContaining("unknown CRS code");
         assertThatThrownBy(() -> SurveyCsvReader.read(write(HEADER + row1), COLS, "EPSG:4326", null))
                 .hasMessageContaining("not a projected CRS");
         String l2 = "L2,2026-05-14T09:31:00.000Z,500000.2,6100000.0,2.5,20.1,49000.1,49000.5\n";
