@@ -29,7 +29,7 @@ import picocli.CommandLine.Parameters;
  * {@code halyard lines}: imports survey lines, positions the sensors, removes the diurnal, repairs spikes,
  * levels on tie lines and writes the processed CSV and the QC report.
  */
-@Command(name = "lines", description = {
+@Command(name = "lines", mixinStandardHelpOptions = true, description = {
         "Process survey lines: import, sensor positions, diurnal correction, spike repair, tie-line levelling,",
         "gradients; writes OUT/lines_processed.csv and OUT/report/ (qc.html, qc_lines.csv, plots)."})
 final class LinesCommand implements Callable<Integer> {
