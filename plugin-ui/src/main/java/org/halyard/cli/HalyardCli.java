@@ -21,6 +21,7 @@ import picocli.CommandLine.Option;
                 RunCommand.class,
                 SimulateCommand.class,
                 DetectabilityCommand.class,
+                LinesCommand.class,
                 SheetCommand.class,
                 GridCommand.class,
         })
