@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import org.halyard.model.FieldDirection;
+import org.halyard.survey.SensorSpec;
 
 /**
  * A parsed run recipe (CONTRACT.md, "Recipe"); paths are resolved against the recipe's folder. Optional
@@ -28,20 +29,11 @@ public record Recipe(Path file, String name, String crs, Survey survey, Path bas
      *
      * @param file     the survey CSV
      * @param columns  role (line, time, x, y, altitude, depth, latitude, longitude) to column name
-     * @param sensors  the magnetometers, in array order
+     * @param sensors  the magnetometers, in array order (offsets: across positive to starboard, along
+     *                 positive forward, metres)
      * @param tieLines names of the tie lines (the levelling datum)
      */
-    public record Survey(Path file, Map<String, String> columns, List<Sensor> sensors, List<String> tieLines) {
-    }
-
-    /**
-     * One magnetometer of the towed array.
-     *
-     * @param column  its column in the survey file (total field, nT)
-     * @param acrossM offset across the track, metres, positive to starboard
-     * @param alongM  offset along the track, metres, positive forward
-     */
-    public record Sensor(String column, double acrossM, double alongM) {
+    public record Survey(Path file, Map<String, String> columns, List<SensorSpec> sensors, List<String> tieLines) {
     }
 
     /**

@@ -13,6 +13,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.halyard.io.GeoTiffGrids;
+import org.halyard.survey.SensorSpec;
 import org.halyard.targets.TargetOptions;
 
 /**
@@ -68,11 +69,11 @@ public final class RecipeReader {
         if (sens == null || !sens.isArray() || sens.isEmpty()) {
             throw c.error("survey.sensors", "give at least one sensor {column, across_m, along_m}");
         }
-        List<Recipe.Sensor> sensors = new ArrayList<>();
+        List<SensorSpec> sensors = new ArrayList<>();
         for (int i = 0; i < sens.size(); i++) {
             JsonNode n = sens.get(i);
             String at = "survey.sensors[" + i + "]";
-            sensors.add(new Recipe.Sensor(c.text(n, "column", true, at), c.number(n, "across_m", 0, at),
+            sensors.add(new SensorSpec(c.text(n, "column", true, at), c.number(n, "across_m", 0, at),
                     c.number(n, "along_m", 0, at)));
         }
         List<String> ties = new ArrayList<>();

@@ -16,6 +16,8 @@ final class RunContext {
     FieldDirection field;
     /** Earth-field intensity in nT once known, else NaN. */
     double fieldIntensityNt = Double.NaN;
+    /** The processed survey lines. */
+    org.halyard.survey.ProcessedSurvey survey;
     /** The levelled total-field anomaly grid, nT. */
     Grid totalField;
     /** Derivatives of the total-field grid, nT/m (x east, y north, z down). */

@@ -57,13 +57,7 @@ final class SourceModel {
             }
         }
         for (Scenario.Linear l : s.linears()) {
-            double[] xyz = new double[l.path().size() * 3];
-            for (int i = 0; i < l.path().size(); i++) {
-                double e = oe + l.path().get(i)[0], n = on + l.path().get(i)[1];
-                xyz[3 * i] = e;
-                xyz[3 * i + 1] = n;
-                xyz[3 * i + 2] = seabed.depth(e, n) + l.burialM();
-            }
+            double[] xyz = followSeabed(l, oe, on, seabed);
             double mpm = DipoleLine.inducedMomentPerMetre(l.massPerMetreKg(), f.intensityNt());
             lines.add(new PlacedLine(l, xyz, new DipoleLine(xyz, mpm, field, LINE_DIPOLE_SPACING)));
         }
@@ -102,5 +96,38 @@ final class SourceModel {
             sum += p.totalField(e, n, z, field);
         }
         return sum;
+    }
+
+    /** Vertex spacing of a buried line, metres: fine enough to follow channels and sand waves. */
+    static final double LINE_VERTEX_SPACING_M = 1.0;
+
+    /**
+     * The path of a cable or pipe, densified to {@link #LINE_VERTEX_SPACING_M} and laid {@code burialM} below
+     * the seabed at every vertex, as {x, y, depth} triples. Interpolating the depth between far-apart chart
+     * vertices instead would leave the line hanging in the water over a channel, where the towed sensors,
+     * which follow the seabed, would pass through it.
+     */
+    static double[] followSeabed(Scenario.Linear l, double oe, double on, AnalyticSeabed seabed) {
+        java.util.List<double[]> pts = new java.util.ArrayList<>();
+        java.util.List<double[]> path = l.path();
+        for (int i = 0; i + 1 < path.size(); i++) {
+            double e0 = oe + path.get(i)[0], n0 = on + path.get(i)[1];
+            double e1 = oe + path.get(i + 1)[0], n1 = on + path.get(i + 1)[1];
+            int steps = Math.max(1, (int) Math.ceil(Math.hypot(e1 - e0, n1 - n0) / LINE_VERTEX_SPACING_M));
+            for (int k = 0; k < steps; k++) {
+                double t = (double) k / steps;
+                pts.add(new double[] {e0 + t * (e1 - e0), n0 + t * (n1 - n0)});
+            }
+        }
+        double[] last = path.get(path.size() - 1);
+        pts.add(new double[] {oe + last[0], on + last[1]});
+        double[] xyz = new double[pts.size() * 3];
+        for (int i = 0; i < pts.size(); i++) {
+            double e = pts.get(i)[0], n = pts.get(i)[1];
+            xyz[3 * i] = e;
+            xyz[3 * i + 1] = n;
+            xyz[3 * i + 2] = seabed.depth(e, n) + l.burialM();
+        }
+        return xyz;
     }
 }

@@ -286,7 +286,7 @@ public final class SurveySimulator {
             if (l.spec().asset() == null) {
                 continue; // an uncharted line: in the truth, not on the chart
             }
-            double[] v = l.xyz();
+            double[] v = chartVertices(l.spec(), s.origin());
             double de = v[3] - v[0], dn = v[4] - v[1], len = Math.hypot(de, dn);
             double re = dn / len * l.spec().chartShiftM(), rn = -de / len * l.spec().chartShiftM();
             Coordinate[] cs = new Coordinate[v.length / 3];
@@ -407,5 +407,15 @@ public final class SurveySimulator {
         } catch (IOException e) {
             throw new UncheckedIOException(file + ": " + e.getMessage(), e);
         }
+    }
+
+    /** A line's chart vertices (the scenario's path, not the densified model), as {x, y, 0} triples. */
+    private static double[] chartVertices(Scenario.Linear l, double[] origin) {
+        double[] v = new double[l.path().size() * 3];
+        for (int i = 0; i < l.path().size(); i++) {
+            v[3 * i] = origin[0] + l.path().get(i)[0];
+            v[3 * i + 1] = origin[1] + l.path().get(i)[1];
+        }
+        return v;
     }
 }

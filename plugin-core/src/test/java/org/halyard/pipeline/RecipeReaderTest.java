@@ -33,7 +33,7 @@ class RecipeReaderTest {
         Recipe r = RecipeReader.read(recipe(MINIMAL));
         assertThat(r.crs()).isEqualTo("EPSG:32631");
         assertThat(r.survey().file()).isEqualTo(dir.resolve("lines.csv"));
-        assertThat(r.survey().sensors()).containsExactly(new Recipe.Sensor("m", 0.5, 0));
+        assertThat(r.survey().sensors()).containsExactly(new org.halyard.survey.SensorSpec("m", 0.5, 0));
         assertThat(r.baseStation()).isNull();
         assertThat(r.field()).isNull();
         assertThat(r.grid().cellM()).isEqualTo(RecipeReader.DEFAULT_CELL_M);
