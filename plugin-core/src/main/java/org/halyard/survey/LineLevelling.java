@@ -34,6 +34,11 @@ public final class LineLevelling {
     static final double RIDGE = 1e-9;
     /** Weight of the datum constraint when ties are adjusted too. */
     static final double DATUM_WEIGHT = 1e3;
+    /** Reweighting passes of the robust fit, the first {@value #HUBER_ITERATIONS} with Huber weights. */
+    static final int ROBUST_ITERATIONS = 8;
+    static final int HUBER_ITERATIONS = 3;
+    /** Below this residual scale (nT) the crossovers already agree and reweighting stops. */
+    static final double MIN_ROBUST_SCALE_NT = 1e-4;
 
     /**
      * The fitted corrections.
@@ -100,16 +105,51 @@ public final class LineLevelling {
         if (nu == 0) {
             return new Solution(order, coeff, tMid, tHalf);
         }
+        // Robust fit by iteratively reweighted least squares: crossovers over steep anomalies (a sensor pair
+        // crossing a pipe along a tie line sees it at other offsets) are outliers that plain least squares
+        // spreads over whole lines. Huber weights first, then Tukey's bisquare (Holland and Welsch 1977,
+        // Commun. Statist. A6(9) 813-827).
+        double[] w = new double[crossovers.size()];
+        java.util.Arrays.fill(w, 1);
+        RealVector sol = null;
+        for (int iter = 0; iter < ROBUST_ITERATIONS; iter++) {
+            sol = weightedSolve(crossovers, w, nu, nl, isTie, order, offset, tMid, tHalf, trend, adjustTies);
+            double[] r = new double[crossovers.size()];
+            for (int c = 0; c < r.length; c++) {
+                r[c] = residual(crossovers.get(c), sol, order, offset, tMid, tHalf);
+            }
+            double scale = 1.4826 * medianAbs(r);
+            if (!(scale > MIN_ROBUST_SCALE_NT)) {
+                break;
+            }
+            boolean bisquare = iter >= HUBER_ITERATIONS;
+            for (int c = 0; c < r.length; c++) {
+                double u = Math.abs(r[c]) / scale;
+                w[c] = bisquare ? (u < 4.685 ? Math.pow(1 - (u / 4.685) * (u / 4.685), 2) : 0)
+                        : (u <= 1.345 ? 1 : 1.345 / u);
+            }
+        }
+        for (int l = 0; l < nl; l++) {
+            for (int j = 0; j <= order[l]; j++) {
+                coeff[l][j] = sol.getEntry(offset[l] + j);
+            }
+        }
+        return new Solution(order, coeff, tMid, tHalf);
+    }
+
+    private static RealVector weightedSolve(List<Crossover> crossovers, double[] w, int nu, int nl, boolean[] isTie,
+                                            int[] order, int[] offset, double[] tMid, double[] tHalf,
+                                            LevellingTrend trend, boolean adjustTies) {
         double[][] nm = new double[nu][nu];
         double[] rhs = new double[nu];
         int[] idx = new int[6];
         double[] a = new double[6];
-        for (Crossover c : crossovers) {
+        for (int ci = 0; ci < crossovers.size(); ci++) {
+            Crossover c = crossovers.get(ci);
             int k = 0;
             k = basis(c.traverseLine(), c.traverseTime(), 1, order, offset, tMid, tHalf, idx, a, k);
             k = basis(c.tieLine(), c.tieTime(), -1, order, offset, tMid, tHalf, idx, a, k);
-            double d = c.tieValue() - c.traverseValue();
-            accumulate(nm, rhs, idx, a, k, d, 1);
+            accumulate(nm, rhs, idx, a, k, c.tieValue() - c.traverseValue(), w[ci]);
         }
         if (adjustTies) {
             for (int j = 0; j <= Math.max(0, trend.order()); j++) {
@@ -134,14 +174,30 @@ public final class LineLevelling {
         for (int i = 0; i < nu; i++) {
             nm[i][i] += RIDGE * Math.max(maxDiag, 1);
         }
-        RealVector sol = new CholeskyDecomposition(new Array2DRowRealMatrix(nm, false), 1e-6, 0)
+        return new CholeskyDecomposition(new Array2DRowRealMatrix(nm, false), 1e-6, 0)
                 .getSolver().solve(new ArrayRealVector(rhs, false));
-        for (int l = 0; l < nl; l++) {
-            for (int j = 0; j <= order[l]; j++) {
-                coeff[l][j] = sol.getEntry(offset[l] + j);
-            }
+    }
+
+    /** The misfit left at a crossover by the corrections {@code sol}, nT. */
+    private static double residual(Crossover c, RealVector sol, int[] order, int[] offset, double[] tMid, double[] tHalf) {
+        int[] idx = new int[12];
+        double[] a = new double[12];
+        int k = basis(c.traverseLine(), c.traverseTime(), 1, order, offset, tMid, tHalf, idx, a, 0);
+        k = basis(c.tieLine(), c.tieTime(), -1, order, offset, tMid, tHalf, idx, a, k);
+        double model = 0;
+        for (int p = 0; p < k; p++) {
+            model += a[p] * sol.getEntry(idx[p]);
         }
-        return new Solution(order, coeff, tMid, tHalf);
+        return model - (c.tieValue() - c.traverseValue());
+    }
+
+    private static double medianAbs(double[] r) {
+        double[] a = new double[r.length];
+        for (int i = 0; i < r.length; i++) {
+            a[i] = Math.abs(r[i]);
+        }
+        java.util.Arrays.sort(a);
+        return a.length == 0 ? 0 : a[a.length / 2];
     }
 
     private static int basis(int l, double time, double sign, int[] order, int[] offset, double[] tMid,
