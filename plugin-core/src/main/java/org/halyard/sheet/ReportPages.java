@@ -44,7 +44,7 @@ public final class ReportPages {
             if (parent != null) {
                 Files.createDirectories(parent);
             }
-            doc.save(file.toFile());
+            PdfFiles.save(doc, file);
             return pages;
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + file + ": " + e.getMessage(), e);

@@ -92,7 +92,7 @@ public final class SheetSeries {
             doc.getDocumentInformation().setTitle(pages.get(0).footer());
             doc.getDocumentInformation().setCreator("Halyard");
             pages.forEach(p -> p.addTo(doc));
-            doc.save(file.toFile());
+            PdfFiles.save(doc, file);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + file + ": " + e.getMessage(), e);
         }
