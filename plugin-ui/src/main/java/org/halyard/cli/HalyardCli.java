@@ -17,6 +17,7 @@ import picocli.CommandLine.Option;
                 + "A target list is an aid to interpretation, never a clearance certificate.",
         subcommands = {
                 ProcessesCommand.class,
+                WorkbenchCommand.class,
         })
 public final class HalyardCli implements Callable<Integer> {
 
