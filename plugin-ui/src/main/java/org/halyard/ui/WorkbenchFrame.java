@@ -45,6 +45,8 @@ public final class WorkbenchFrame extends JFrame {
     private final ProfilePanel profile = new ProfilePanel();
     private final JTabbedPane bottom = new JTabbedPane();
     private final CountDownLatch loaded = new CountDownLatch(1);
+    private final ToolboxPanel toolbox;
+    private final JTabbedPane right;
 
     public WorkbenchFrame() {
         super(TITLE);
@@ -53,15 +55,11 @@ public final class WorkbenchFrame extends JFrame {
         canvas.setPreferredSize(new Dimension(900, 560));
         canvas.onCursor(status::cursor);
         canvas.onViewChange(() -> status.viewChanged(canvas.viewport()));
-        canvas.onProfile(line -> {
-            profile.show(line, visibleGrids(), stack.ofType(VectorLayer.class).stream()
-                    .filter(l -> !(l instanceof TargetLayer) && l.isVisible()).toList());
-            bottom.setSelectedComponent(profile);
-        });
+        canvas.onProfile(this::showProfile);
         List<ProcessSpec> processes = ProcessCatalog.all();
-        ToolboxPanel toolbox = new ToolboxPanel(processes, () -> stack.ofType(GridLayer.class), this::addOutputs);
+        toolbox = new ToolboxPanel(processes, () -> stack.ofType(GridLayer.class), this::addOutputs);
 
-        JTabbedPane right = new JTabbedPane();
+        right = new JTabbedPane();
         right.addTab("Layers", new LayerPanel(stack, canvas));
         right.addTab("Operators (" + processes.size() + ")", toolbox);
         right.setPreferredSize(new Dimension(360, 600));
@@ -90,6 +88,34 @@ public final class WorkbenchFrame extends JFrame {
 
     public MapCanvas canvas() {
         return canvas;
+    }
+
+    /** Charts the visible grids along {@code line} (map metres) with nearby track samples. */
+    public void showProfile(java.awt.geom.Line2D line) {
+        profile.show(line, visibleGrids(), stack.ofType(VectorLayer.class).stream()
+                .filter(l -> !(l instanceof TargetLayer) && l.isVisible()).toList());
+        bottom.setSelectedComponent(profile);
+    }
+
+    /** Shows the side tab whose title starts with {@code title} ("Layers", "Operators"). */
+    public void showSideTab(String title) {
+        for (int i = 0; i < right.getTabCount(); i++) {
+            if (right.getTitleAt(i).startsWith(title)) {
+                right.setSelectedIndex(i);
+            }
+        }
+    }
+
+    /** Shows the form of the operator called {@code qualifiedName} in the toolbox. */
+    public void showOperator(String qualifiedName) {
+        showSideTab("Operators");
+        toolbox.choose(ProcessCatalog.find(qualifiedName));
+    }
+
+    /** Shows the target table and selects target {@code id}. */
+    public void selectTarget(long id) {
+        bottom.setSelectedComponent(targets);
+        targets.select(id);
     }
 
     private List<GridLayer> visibleGrids() {

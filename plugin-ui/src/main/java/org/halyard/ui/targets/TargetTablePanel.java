@@ -200,9 +200,17 @@ public final class TargetTablePanel extends JPanel {
                 id = f.id();
             }
         }
+        select(id);
+    }
+
+    /** Selects target {@code id} in the table and on the map; a negative id clears the selection. */
+    public void select(long id) {
+        if (model == null) {
+            return;
+        }
         selecting = true;
         table.clearSelection();
-        if (id >= 0) {
+        if (id >= 0 && model.rowOf(id) >= 0) {
             int viewRow = table.convertRowIndexToView(model.rowOf(id));
             if (viewRow >= 0) {
                 table.setRowSelectionInterval(viewRow, viewRow);

@@ -125,7 +125,7 @@ public final class ToolboxPanel extends JPanel {
     }
 
     /** Shows the form of {@code p} (or the hint when {@code null}). */
-    void choose(ProcessSpec p) {
+    public void choose(ProcessSpec p) {
         formHolder.removeAll();
         if (p == null) {
             form = null;
