@@ -174,17 +174,51 @@ public final class CsvTableReader implements Closeable {
      * @throws IllegalArgumentException naming file, line and column when the field is not a number
      */
     public double number(int col) {
+        return parsed(col, FastDecimal::parse, "not a number");
+    }
+
+    /** A char-range parser returning NaN for text it does not accept. */
+    private interface RangeParser {
+        double parse(char[] s, int from, int to);
+    }
+
+    private double parsed(int col, RangeParser parser, String what) {
         requireFields(col + 1);
         int s = trimmedStart(col), e = trimmedEnd(col);
         if (s >= e) {
             return Double.NaN;
         }
-        double v = FastDecimal.parse(line, s, e);
+        double v = parser.parse(line, s, e);
         if (Double.isNaN(v) && !FastDecimal.isNanLiteral(line, s, e)) {
             throw new IllegalArgumentException(file + ": line " + lineNumber + ", column '" + header.get(col)
-                    + "': not a number: '" + new String(line, s, Math.min(e - s, 40)) + "'");
+                    + "': " + what + ": '" + new String(line, s, Math.min(e - s, 40)) + "'");
         }
         return v;
+    }
+
+    /**
+     * Field {@code col} of the current row as an ISO 8601 UTC time in epoch seconds (see {@link IsoTime});
+     * an empty field gives {@code NaN}.
+     *
+     * @throws IllegalArgumentException naming file, line and column when the field is not such a time
+     */
+    public double isoTime(int col) {
+        return parsed(col, IsoTime::parse, "not an ISO 8601 UTC time (like 2026-05-14T09:30:00.100Z)");
+    }
+
+    /** Whether field {@code col} of the current row, without quotes, equals {@code s}; creates no string. */
+    public boolean textEquals(int col, String s) {
+        requireFields(col + 1);
+        int a = trimmedStart(col), e = trimmedEnd(col);
+        if (e - a != s.length()) {
+            return false;
+        }
+        for (int k = 0; k < s.length(); k++) {
+            if (line[a + k] != s.charAt(k)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private int trimmedStart(int col) {

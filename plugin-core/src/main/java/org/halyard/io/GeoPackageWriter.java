@@ -23,9 +23,7 @@ import mil.nga.geopackage.features.user.FeatureTableMetadata;
 import mil.nga.geopackage.geom.GeoPackageGeometryData;
 import mil.nga.geopackage.srs.SpatialReferenceSystem;
 import mil.nga.sf.GeometryType;
-import org.geotools.api.referencing.FactoryException;
 import org.geotools.api.referencing.crs.CoordinateReferenceSystem;
-import org.geotools.referencing.CRS;
 import org.locationtech.jts.geom.Envelope;
 import org.locationtech.jts.io.WKBWriter;
 
@@ -157,9 +155,9 @@ public final class GeoPackageWriter {
         }
         CoordinateReferenceSystem crs;
         try {
-            crs = CRS.decode("EPSG:" + code);
-        } catch (FactoryException e) {
-            throw new IllegalArgumentException(file + ": unknown CRS " + crsCode + " (" + e.getMessage() + ")", e);
+            crs = GeoTiffGrids.decode("EPSG:" + code);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException(file + ": " + e.getMessage(), e);
         }
         SpatialReferenceSystem srs = new SpatialReferenceSystem();
         srs.setSrsId(code);

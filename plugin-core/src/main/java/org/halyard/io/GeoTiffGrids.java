@@ -13,7 +13,6 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.HashMap;
 import java.util.Map;
-import javax.media.jai.RasterFactory;
 import org.geotools.api.referencing.FactoryException;
 import org.geotools.api.referencing.crs.CoordinateReferenceSystem;
 import org.geotools.api.referencing.crs.GeographicCRS;
@@ -130,9 +129,7 @@ public final class GeoTiffGrids {
         }
         RenderedImage img = coverage.getRenderedImage();
         int cols = img.getWidth(), rows = img.getHeight();
-        Raster raster = img.getData();
-        float[] values = new float[cols * rows];
-        raster.getSamples(raster.getMinX(), raster.getMinY(), cols, rows, 0, values);
+        float[] values = band0(img);
         int valid = 0;
         for (int i = 0; i < values.length; i++) {
             float v = values[i];
@@ -184,14 +181,16 @@ public final class GeoTiffGrids {
     public static GridCoverage2D toCoverage(Grid grid, String name) {
         GridGeometry g = grid.geometry();
         CoordinateReferenceSystem crs = decode(g.crsCode());
-        WritableRaster raster = RasterFactory.createBandedRaster(DataBuffer.TYPE_FLOAT, g.columns(), g.rows(), 1, null);
         float[] v = grid.toArray();
         for (int i = 0; i < v.length; i++) {
             if (Float.isNaN(v[i])) {
                 v[i] = NODATA;
             }
         }
-        raster.setSamples(0, 0, g.columns(), g.rows(), 0, v);
+        // A plain pixel-interleaved raster over our own array: no copy, and the TIFF writer's fast path.
+        WritableRaster raster = Raster.createWritableRaster(new java.awt.image.PixelInterleavedSampleModel(
+                DataBuffer.TYPE_FLOAT, g.columns(), g.rows(), 1, g.columns(), new int[] {0}),
+                new java.awt.image.DataBufferFloat(v, v.length), null);
         ReferencedEnvelope env = new ReferencedEnvelope(g.west(), g.east(), g.south(), g.north(), crs);
         Map<String, Object> props = new HashMap<>();
         CoverageUtilities.setNoDataProperty(props, new NoDataContainer(NODATA));
@@ -222,15 +221,59 @@ public final class GeoTiffGrids {
     /** The authority code of a CRS, {@code EPSG:n} where one is found, else its WKT name. */
     public static String codeOf(CoordinateReferenceSystem crs) {
         try {
-            Integer epsg = CRS.lookupEpsgCode(crs, true);
+            // Identifiers first: the full scan of the EPSG database costs seconds.
+            Integer epsg = CRS.lookupEpsgCode(crs, false);
+            if (epsg == null) {
+                epsg = CRS.lookupEpsgCode(crs, true);
+            }
             if (epsg != null) {
                 return "EPSG:" + epsg;
             }
         } catch (FactoryException ignored) {
-            // fall back on the name below
+            // fall back on the error below
         }
         throw new IllegalArgumentException("the grid's CRS '" + crs.getName().getCode()
                 + "' has no EPSG code; Halyard needs an EPSG-coded projected CRS");
+    }
+
+    /** Band 0 of an image as floats, row-major, copied tile by tile (directly where the layout allows). */
+    static float[] band0(RenderedImage img) {
+        int w = img.getWidth(), h = img.getHeight(), x0 = img.getMinX(), y0 = img.getMinY();
+        float[] out = new float[w * h];
+        for (int ty = img.getMinTileY(); ty < img.getMinTileY() + img.getNumYTiles(); ty++) {
+            for (int tx = img.getMinTileX(); tx < img.getMinTileX() + img.getNumXTiles(); tx++) {
+                Raster t = img.getTile(tx, ty);
+                java.awt.Rectangle r = t.getBounds().intersection(new java.awt.Rectangle(x0, y0, w, h));
+                if (r.isEmpty()) {
+                    continue;
+                }
+                if (t.getSampleModel() instanceof java.awt.image.ComponentSampleModel sm
+                        && t.getDataBuffer() instanceof java.awt.image.DataBufferFloat db) {
+                    float[] data = db.getData(sm.getBankIndices()[0]);
+                    int ps = sm.getPixelStride(), ss = sm.getScanlineStride();
+                    int base = db.getOffsets()[sm.getBankIndices()[0]] + sm.getBandOffsets()[0];
+                    int tminX = t.getMinX() - t.getSampleModelTranslateX(), tminY = t.getMinY() - t.getSampleModelTranslateY();
+                    for (int y = r.y; y < r.y + r.height; y++) {
+                        int src = base + (y - t.getMinY() + tminY) * ss + (r.x - t.getMinX() + tminX) * ps;
+                        int dst = (y - y0) * w + (r.x - x0);
+                        if (ps == 1) {
+                            System.arraycopy(data, src, out, dst, r.width);
+                        } else {
+                            for (int x = 0; x < r.width; x++) {
+                                out[dst + x] = data[src + x * ps];
+                            }
+                        }
+                    }
+                } else {
+                    float[] row = new float[r.width * r.height];
+                    t.getSamples(r.x, r.y, r.width, r.height, 0, row);
+                    for (int y = 0; y < r.height; y++) {
+                        System.arraycopy(row, y * r.width, out, (r.y - y0 + y) * w + (r.x - x0), r.width);
+                    }
+                }
+            }
+        }
+        return out;
     }
 
     private static String firstLine(Exception e) {

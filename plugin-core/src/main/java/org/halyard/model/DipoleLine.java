@@ -124,9 +124,10 @@ public final class DipoleLine {
      * @param field Earth-field direction for the projection
      */
     public double totalField(double px, double py, double pz, FieldDirection field) {
+        double fe = field.east(), fn = field.north(), fd = field.down();
         double s = 0;
         for (Dipole d : dipoles) {
-            s += d.totalField(px, py, pz, field);
+            s += Dipole.totalField(px - d.x(), py - d.y(), pz - d.z(), d.mx(), d.my(), d.mz(), fe, fn, fd);
         }
         return s;
     }

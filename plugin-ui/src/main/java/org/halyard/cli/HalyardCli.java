@@ -17,6 +17,13 @@ import picocli.CommandLine.Option;
                 + "A target list is an aid to interpretation, never a clearance certificate.",
         subcommands = {
                 ProcessesCommand.class,
+                FilterCommand.class,
+                RunCommand.class,
+                SimulateCommand.class,
+                DetectabilityCommand.class,
+                LinesCommand.class,
+                SheetCommand.class,
+                GridCommand.class,
                 WorkbenchCommand.class,
         })
 public final class HalyardCli implements Callable<Integer> {
@@ -65,7 +72,20 @@ public final class HalyardCli implements Callable<Integer> {
         return ex.getClass().getSimpleName();
     }
 
+    /** Loggers kept reachable so their quieter levels stick (java.util.logging holds them weakly). */
+    private static final java.util.List<java.util.logging.Logger> QUIET = new java.util.ArrayList<>();
+
+    /** Library chatter (GeoTools, image I/O) would bury our one-line messages: keep only severe records. */
+    static void quietLibraryLogs() {
+        for (String name : new String[] {"org.geotools", "it.geosolutions", "javax.media.jai", "mil.nga", "hsqldb.db"}) {
+            java.util.logging.Logger l = java.util.logging.Logger.getLogger(name);
+            l.setLevel(java.util.logging.Level.SEVERE);
+            QUIET.add(l);
+        }
+    }
+
     public static void main(String[] args) {
+        quietLibraryLogs();
         int code = execute(args);
         System.out.flush();
         // JTransforms' pool threads are not daemons: exit explicitly so the command returns (STACK.md).

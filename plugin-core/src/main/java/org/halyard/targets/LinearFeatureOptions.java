@@ -1,0 +1,47 @@
+package org.halyard.targets;
+
+/**
+ * How ridges of the analytic signal become linear features.
+ *
+ * @param thresholdFactor  ridge cells must exceed {@code background + k sigma} of the grid, k
+ * @param minAnisotropy    |curvature across| / |curvature along| at least this (1 or more)
+ * @param maxAlongSlope    |gradient along the ridge| / value at most this, 1/m: a cable's analytic signal
+ *                         varies slowly along it, the flank of a compact peak falls fast
+ * @param maxTurnDeg       neighbouring ridge cells link when their directions differ by at most this, degrees
+ * @param minLengthM       shortest feature kept, m
+ * @param maxGapM          collinear pieces closer than this are merged, m
+ * @param maxDeviationDeg  a feature's cells may turn from its overall axis by this on average, degrees
+ * @param vertexSpacingM   spacing of the polyline vertices before simplification, m
+ * @param labelDistanceM   a pick this close to a feature is labelled {@code linear}, m
+ * @param dominance        ...unless its amplitude exceeds this times the feature's median amplitude
+ */
+public record LinearFeatureOptions(double thresholdFactor, double minAnisotropy, double maxAlongSlope,
+                                   double maxTurnDeg, double minLengthM, double maxGapM, double maxDeviationDeg,
+                                   double vertexSpacingM, double labelDistanceM, double dominance) {
+
+    /** Defaults for sensors 1 to 5 m above the objects, cells of 0.25 to 1 m (common practice). */
+    public static final LinearFeatureOptions DEFAULT = new LinearFeatureOptions(5, 3, 0.1, 20, 20, 8, 25, 2, 2, 2);
+
+    public LinearFeatureOptions {
+        requirePositive(thresholdFactor, "ridge threshold factor");
+        requirePositive(maxAlongSlope, "maximum along-ridge slope (1/m)");
+        requirePositive(maxTurnDeg, "maximum turn between ridge cells (degrees)");
+        requirePositive(minLengthM, "minimum feature length (m)");
+        requirePositive(maxDeviationDeg, "maximum deviation from the feature axis (degrees)");
+        requirePositive(vertexSpacingM, "vertex spacing (m)");
+        requirePositive(dominance, "dominance factor");
+        if (!(minAnisotropy >= 1)) {
+            throw new IllegalArgumentException("minimum ridge anisotropy must be at least 1, got " + minAnisotropy);
+        }
+        if (!(maxGapM >= 0) || !(labelDistanceM >= 0)) {
+            throw new IllegalArgumentException("gap and label distances must be 0 m or more, got " + maxGapM
+                    + " and " + labelDistanceM);
+        }
+    }
+
+    private static void requirePositive(double v, String what) {
+        if (!(v > 0)) {
+            throw new IllegalArgumentException(what + " must be positive, got " + v);
+        }
+    }
+}
