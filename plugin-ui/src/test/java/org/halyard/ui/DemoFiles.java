@@ -33,24 +33,13 @@ public final class DemoFiles {
     private DemoFiles() {
     }
 
+    private static Grid totalField;
+
     /** Writes the files into {@code dir} and returns them: total field, bathymetry, GeoPackage. */
     public static List<Path> write(Path dir) throws Exception {
         Files.createDirectories(dir);
-        GridGeometry geo = new GridGeometry(260, 200, WEST, NORTH, CELL, CRS);
-        List<Dipole> ds = new ArrayList<>();
-        for (double[] o : OBJECTS) {
-            ds.add(Dipole.along(o[0], o[1], 5, SteelSphere.inducedMoment(o[2], 49_000), FIELD));
-        }
-        DipoleLine cable = new DipoleLine(new double[] {500_000, 6_000_160, 6, 500_260, 6_000_60, 6},
-                DipoleLine.inducedMomentPerMetre(20, 49_000), FIELD, 1.0);
-        Grid tf = Grid.sample(geo, (x, y) -> {
-            double v = cable.totalField(x, y, 0, FIELD);
-            for (Dipole d : ds) {
-                v += d.totalField(x, y, 0, FIELD);
-            }
-            return v;
-        });
-        Grid bathy = Grid.sample(geo, (x, y) -> 6 + 0.02 * (x - WEST) + 0.8 * Math.sin((y - NORTH) / 25));
+        Grid tf = totalField();
+        Grid bathy = Grid.sample(tf.geometry(), (x, y) -> 6 + 0.02 * (x - WEST) + 0.8 * Math.sin((y - NORTH) / 25));
         Path tfPath = dir.resolve("total_field.tif");
         Path bathyPath = dir.resolve("bathymetry.tif");
         GeoTiffGrids.write(tf, tfPath);
@@ -58,6 +47,28 @@ public final class DemoFiles {
         Path gpkg = dir.resolve("halyard.gpkg");
         GeoPackageWriter.write(gpkg, List.of(targets(), tracks(), infrastructure()), Instant.parse("2026-05-14T00:00:00Z"));
         return List.of(tfPath, bathyPath, gpkg);
+    }
+
+    /** The forward-modelled field, computed once per test JVM (the cable sum is the slow part). */
+    private static synchronized Grid totalField() {
+        if (totalField != null) {
+            return totalField;
+        }
+        GridGeometry geo = new GridGeometry(260, 200, WEST, NORTH, CELL, CRS);
+        List<Dipole> ds = new ArrayList<>();
+        for (double[] o : OBJECTS) {
+            ds.add(Dipole.along(o[0], o[1], 5, SteelSphere.inducedMoment(o[2], 49_000), FIELD));
+        }
+        DipoleLine cable = new DipoleLine(new double[] {500_000, 6_000_160, 6, 500_260, 6_000_60, 6},
+                DipoleLine.inducedMomentPerMetre(20, 49_000), FIELD, 2.0);
+        totalField = Grid.sample(geo, (x, y) -> {
+            double v = cable.totalField(x, y, 0, FIELD);
+            for (Dipole d : ds) {
+                v += d.totalField(x, y, 0, FIELD);
+            }
+            return v;
+        });
+        return totalField;
     }
 
     private static FeatureLayer targets() {
