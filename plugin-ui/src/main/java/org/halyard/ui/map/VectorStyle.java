@@ -13,17 +13,17 @@ import java.awt.Color;
  */
 public record VectorStyle(Color stroke, Color fill, float widthPx, float symbolPx, boolean dashed) {
 
-    /** A style for a layer named {@code name}: tracks thin, infrastructure bold, contours faint. */
+    /** A style for a layer named {@code name}: infrastructure bold and dashed (checked first), tracks thin, contours faint. */
     public static VectorStyle forName(String name) {
         String n = name.toLowerCase(java.util.Locale.ROOT);
-        if (n.contains("track") || n.contains("line") && !n.contains("pipeline")) {
-            return new VectorStyle(new Color(0x3C, 0x4B, 0x55, 170), new Color(0, 0, 0, 0), 0.8f, 2.5f, false);
-        }
         if (n.contains("contour") || n.contains("bathy")) {
             return new VectorStyle(new Color(0x4F, 0x7C, 0x8A, 150), new Color(0, 0, 0, 0), 0.7f, 3f, false);
         }
         if (n.contains("cable") || n.contains("pipe") || n.contains("asset") || n.contains("infra")) {
             return new VectorStyle(new Color(0xB0, 0x2E, 0x8A), new Color(0xB0, 0x2E, 0x8A, 40), 2.2f, 6f, true);
+        }
+        if (n.contains("track") || n.contains("line") && !n.contains("pipeline")) {
+            return new VectorStyle(new Color(0x3C, 0x4B, 0x55, 170), new Color(0, 0, 0, 0), 0.8f, 2.5f, false);
         }
         return new VectorStyle(new Color(0x2F, 0x3A, 0x40), new Color(0x8C, 0x7A, 0x5B, 60), 1.2f, 5f, false);
     }
