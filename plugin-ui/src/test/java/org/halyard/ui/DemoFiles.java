@@ -59,10 +59,14 @@ public final class DemoFiles {
         for (double[] o : OBJECTS) {
             ds.add(Dipole.along(o[0], o[1], 5, SteelSphere.inducedMoment(o[2], 49_000), FIELD));
         }
-        DipoleLine cable = new DipoleLine(new double[] {500_000, 6_000_160, 6, 500_260, 6_000_60, 6},
-                DipoleLine.inducedMomentPerMetre(20, 49_000), FIELD, 2.0);
+        // the cable as a chain of dipoles 2 m apart (the limit DipoleLine refines; coarse is enough for a picture)
+        double perMetre = DipoleLine.inducedMomentPerMetre(20, 49_000);
+        for (int k = 0; k <= 139; k++) {
+            double t = k / 139.0;
+            ds.add(Dipole.along(500_000 + 260 * t, 6_000_160 - 100 * t, 6, perMetre * 2.0, FIELD));
+        }
         totalField = Grid.sample(geo, (x, y) -> {
-            double v = cable.totalField(x, y, 0, FIELD);
+            double v = 0;
             for (Dipole d : ds) {
                 v += d.totalField(x, y, 0, FIELD);
             }
