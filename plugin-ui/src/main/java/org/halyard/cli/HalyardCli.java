@@ -24,6 +24,7 @@ import picocli.CommandLine.Option;
                 LinesCommand.class,
                 SheetCommand.class,
                 GridCommand.class,
+                WorkbenchCommand.class,
         })
 public final class HalyardCli implements Callable<Integer> {
 
