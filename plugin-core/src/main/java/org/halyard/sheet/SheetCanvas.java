@@ -25,13 +25,17 @@ import org.apache.pdfbox.util.Matrix;
  */
 public final class SheetCanvas implements AutoCloseable {
 
-    /** Regular text face (PDF standard font, so text stays searchable and extractable). */
+    /** Regular text face for measuring text (PDF standard font, so text stays searchable and extractable). */
     static final PDType1Font REGULAR = new PDType1Font(Standard14Fonts.FontName.HELVETICA);
     /** Bold text face. */
     static final PDType1Font BOLD = new PDType1Font(Standard14Fonts.FontName.HELVETICA_BOLD);
 
     private final PDDocument document;
     private final PDPageContentStream out;
+    // Fonts written into pages are this canvas's own: font objects shared between documents carry object
+    // numbers from the previous document, and a second document in the same JVM came out in another order.
+    private final PDType1Font regular = new PDType1Font(Standard14Fonts.FontName.HELVETICA);
+    private final PDType1Font bold = new PDType1Font(Standard14Fonts.FontName.HELVETICA_BOLD);
 
     /** Opens a canvas on {@code page}, which must belong to {@code document}. */
     public SheetCanvas(PDDocument document, PDPage page) {
@@ -181,7 +185,7 @@ public final class SheetCanvas implements AutoCloseable {
         float w = textWidth(safe, size, bold);
         run(() -> {
             out.beginText();
-            out.setFont(bold ? BOLD : REGULAR, size);
+            out.setFont(bold ? this.bold : regular, size);
             double a = Math.toRadians(angle);
             double ox = x - align * w * Math.cos(a);
             double oy = y - align * w * Math.sin(a);

@@ -106,13 +106,6 @@ class SurveyRunTest {
             if (rel.toString().equals("report/run.log")) {
                 continue; // holds the timings
             }
-            if (rel.toString().equals("sheets/sheet-01.pdf")) {
-                // Known gap: a second run in the same JVM writes a map sheet that differs from the first;
-                // two separate `halyard run` processes give identical sheets (checked by hand, see the
-                // issue note). Until the in-process cause is found, the sheet is compared by size only.
-                assertThat(Files.size(second.resolve(rel))).as(rel.toString()).isEqualTo(Files.size(f));
-                continue;
-            }
             assertThat(Files.readAllBytes(second.resolve(rel))).as(rel.toString()).isEqualTo(Files.readAllBytes(f));
         }
     }
