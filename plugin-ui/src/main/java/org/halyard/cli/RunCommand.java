@@ -35,7 +35,8 @@ final class RunCommand implements Callable<Integer> {
         System.out.println("  halyard.gpkg           layers targets, linear_features, tracks: open as a vector layer");
         System.out.println("  targets.csv            target list; linear_features.csv: cables and pipelines (WKT)");
         System.out.println("  report/                QC report (qc.html) and run.log; sheets/: PDF map sheets");
-        System.out.println("  view them together:   ./halyard workbench " + recipeFile);
+        System.out.println("  view them together:   ./halyard workbench " + o.resolve("grids/analytic_signal.tif") + " "
+                + o.resolve("grids/total_field.tif") + " " + o.resolve("halyard.gpkg"));
         System.out.println(CAUTION);
         return 0;
     }
