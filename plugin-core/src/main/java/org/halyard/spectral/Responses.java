@@ -56,32 +56,25 @@ public final class Responses {
 
     /** Derivative towards east, {@code i kx}; unit per metre. */
     public static WavenumberResponse dx() {
-        return new WavenumberResponse() {
-            @Override
-            public void at(double kx, double ky, double k, double[] out) {
-                out[0] = 0;
-                out[1] = kx;
-            }
-
-            @Override
-            public LinearTrend onTrend(LinearTrend t) {
-                return new LinearTrend(t.bx(), 0, 0, t.x0(), t.y0());
-            }
-        };
+        return horizontalDerivative(true);
     }
 
     /** Derivative towards north, {@code i ky}; unit per metre. */
     public static WavenumberResponse dy() {
+        return horizontalDerivative(false);
+    }
+
+    private static WavenumberResponse horizontalDerivative(boolean east) {
         return new WavenumberResponse() {
             @Override
             public void at(double kx, double ky, double k, double[] out) {
                 out[0] = 0;
-                out[1] = ky;
+                out[1] = east ? kx : ky;
             }
 
             @Override
             public LinearTrend onTrend(LinearTrend t) {
-                return new LinearTrend(t.by(), 0, 0, t.x0(), t.y0());
+                return new LinearTrend(east ? t.bx() : t.by(), 0, 0, t.x0(), t.y0());
             }
         };
     }
