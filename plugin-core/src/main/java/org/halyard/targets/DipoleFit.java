@@ -85,9 +85,12 @@ public final class DipoleFit {
         }
         double sensorDepth = LineSamples.medianAt(samples.z(), idx);
         Model model = new Model(obs, field, options.background().terms, x, y);
+        // The starts are independent optimisations of one immutable model: run them on all cores, then pick
+        // in start order so the result does not depend on the scheduling.
+        List<Optional<DipoleFitResult>> fits = java.util.stream.IntStream.range(0, starts.size()).parallel()
+                .mapToObj(i -> optimise(model, target, starts.get(i), sensorDepth, options).filter(accept)).toList();
         Optional<DipoleFitResult> best = Optional.empty();
-        for (double[] s : starts) {
-            Optional<DipoleFitResult> f = optimise(model, target, s, sensorDepth, options).filter(accept);
+        for (Optional<DipoleFitResult> f : fits) {
             if (f.isPresent() && (best.isEmpty() || f.get().rms() < best.get().rms())) {
                 best = f;
             }
