@@ -34,7 +34,13 @@ public final class InfrastructureLayer {
      * @throws IllegalArgumentException on a missing file, layer or column, naming them
      */
     public static Result read(Path file, String layer, String idColumn, String surveyCrs) {
-        FeatureLayer fl = GeoPackageReader.read(file, layer);
+        return of(GeoPackageReader.read(file, layer), file + ": layer " + layer, idColumn, surveyCrs);
+    }
+
+    /**
+     * As {@link #read} for a layer already read; {@code label} names it in error messages.
+     */
+    public static Result of(FeatureLayer fl, String label, String idColumn, String surveyCrs) {
         if (idColumn != null) {
             fl.column(idColumn);
         }
@@ -44,7 +50,7 @@ public final class InfrastructureLayer {
         for (FeatureLayer.Feature f : fl.features()) {
             Object id = idColumn == null ? f.id() : f.attributes().get(idColumn);
             if (id == null || id.toString().isBlank()) {
-                throw new IllegalArgumentException(file + ": layer " + layer + ", feature " + f.id()
+                throw new IllegalArgumentException(label + ", feature " + f.id()
                         + ": empty asset id in column '" + idColumn + "'");
             }
             assets.add(new Asset(id.toString(), move ? rp.apply(f.geometry()) : f.geometry()));

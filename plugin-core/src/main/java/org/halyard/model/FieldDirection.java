@@ -45,6 +45,23 @@ public record FieldDirection(double inclinationDeg, double declinationDeg) {
     }
 
     /**
+     * The direction of two optional angles in degrees, as user inputs give them: null when both are
+     * absent.
+     *
+     * @param names how to name the pair in the error, e.g. {@code "--inclination and --declination"}
+     * @throws IllegalArgumentException when only one of the two is given
+     */
+    public static FieldDirection ofOptional(Double inclinationDeg, Double declinationDeg, String names) {
+        if (inclinationDeg == null && declinationDeg == null) {
+            return null;
+        }
+        if (inclinationDeg == null || declinationDeg == null) {
+            throw new IllegalArgumentException("give both " + names + " (degrees)");
+        }
+        return new FieldDirection(inclinationDeg, declinationDeg);
+    }
+
+    /**
      * The direction of a vector given in the project frame (x east, y north, z down); any length but zero.
      */
     public static FieldDirection ofVector(double east, double north, double down) {

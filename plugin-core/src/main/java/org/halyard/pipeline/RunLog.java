@@ -29,7 +29,7 @@ final class RunLog {
         lines.add("    note: " + message);
     }
 
-    void timing(String name, long millis) {
+    void timing(long millis) {
         lines.add(String.format(Locale.ROOT, "    time: %.2f s", millis / 1000.0));
     }
 

@@ -56,7 +56,7 @@ public final class SurveyRun {
                 long t0 = System.nanoTime();
                 s.run(ctx, p);
                 long ms = (System.nanoTime() - t0) / 1_000_000;
-                log.timing(s.name(), ms);
+                log.timing(ms);
                 listener.stageFinished(s.name(), ms);
             }
             log.write(work.resolve("report").resolve("run.log"));

@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Optional;
 import org.halyard.grid.Grid;
 import org.halyard.grid.Progress;
+import org.halyard.io.FeatureLayer;
 import org.halyard.io.GeoPackageReader;
 import org.halyard.io.GeoTiffGrids;
 import org.halyard.io.InfrastructureLayer;
@@ -77,10 +78,10 @@ final class TargetsStage implements Stage {
             return assets;
         }
         for (String layer : GeoPackageReader.layerNames(gpkg)) {
-            boolean hasAsset = GeoPackageReader.read(gpkg, layer).columns().stream()
-                    .anyMatch(c -> c.name().equals("asset"));
-            InfrastructureLayer.Result res = InfrastructureLayer.read(gpkg, layer, hasAsset ? "asset" : null,
-                    ctx.recipe().crs());
+            FeatureLayer fl = GeoPackageReader.read(gpkg, layer);
+            boolean hasAsset = fl.columns().stream().anyMatch(c -> c.name().equals("asset"));
+            InfrastructureLayer.Result res = InfrastructureLayer.of(fl, gpkg + ": layer " + layer,
+                    hasAsset ? "asset" : null, ctx.recipe().crs());
             if (res.reprojected()) {
                 ctx.note("infrastructure layer " + layer + " reprojected from " + res.sourceCrs() + " to "
                         + ctx.recipe().crs());

@@ -4,7 +4,6 @@ import org.geotools.api.util.ProgressListener;
 import org.geotools.coverage.grid.GridCoverage2D;
 import org.halyard.grid.Grid;
 import org.halyard.io.GeoTiffGrids;
-import org.halyard.model.FieldDirection;
 import org.halyard.spectral.FilterBank;
 import org.halyard.spectral.FilterOperation;
 import org.halyard.spectral.FilterSettings;
@@ -34,17 +33,6 @@ final class FilterProcessSupport {
     private static Double noData(GridCoverage2D c) {
         var nd = org.geotools.coverage.util.CoverageUtilities.getNoDataProperty(c);
         return nd == null ? null : nd.getAsSingleValue();
-    }
-
-    /** The field direction from two nullable angles in degrees; null when both are null. */
-    static FieldDirection direction(Double inclination, Double declination, String what) {
-        if (inclination == null && declination == null) {
-            return null;
-        }
-        if (inclination == null || declination == null) {
-            throw new IllegalArgumentException(what + " needs both inclination and declination (degrees)");
-        }
-        return new FieldDirection(inclination, declination);
     }
 
     static double or(Double v, double fallback) {

@@ -36,8 +36,8 @@ public final class ReductionToPoleProcess implements HalyardProcess {
             @DescribeParameter(name = "stabilisingInclination", description = "Inclination below which the filter amplitude is stabilised, degrees",
                     min = 0, defaultValue = "20", minValue = 0, maxValue = 90, meta = {"unit=degrees"}) Double stabilising,
             ProgressListener monitor) {
-        return FilterProcessSupport.run(data, FilterOperation.REDUCE_TO_POLE, new FilterSettings(FilterProcessSupport.direction(inclination, declination, "field"),
-                FilterProcessSupport.direction(magInclination, magDeclination, "magnetisation"), 0, 1,
+        return FilterProcessSupport.run(data, FilterOperation.REDUCE_TO_POLE, new FilterSettings(org.halyard.model.FieldDirection.ofOptional(inclination, declination, "field inclination and declination"),
+                org.halyard.model.FieldDirection.ofOptional(magInclination, magDeclination, "magnetisation inclination and declination"), 0, 1,
                 FilterSettings.DEFAULT_DAMPING, FilterProcessSupport.or(stabilising, FilterSettings.DEFAULT_STABILISING_INCLINATION),
                 org.halyard.spectral.GridSpectrum.MIN_PAD_FACTOR), monitor);
     }

@@ -64,8 +64,8 @@ final class FilterCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         FilterOperation operation = FilterOperation.ofCliName(op);
-        FieldDirection field = pair(inclination, declination, "--inclination and --declination");
-        FieldDirection mag = pair(magInclination, magDeclination, "--magnetisation-inclination and --magnetisation-declination");
+        FieldDirection field = FieldDirection.ofOptional(inclination, declination, "--inclination and --declination");
+        FieldDirection mag = FieldDirection.ofOptional(magInclination, magDeclination, "--magnetisation-inclination and --magnetisation-declination");
         if (operation == FilterOperation.REDUCE_TO_POLE && field == null) {
             throw new IllegalArgumentException("reduce-to-pole needs --inclination and --declination (degrees)");
         }
@@ -77,15 +77,5 @@ final class FilterCommand implements Callable<Integer> {
         bar.done();
         System.err.println("wrote " + out + " (" + operation.title() + ", " + operation.unit() + ")");
         return 0;
-    }
-
-    private static FieldDirection pair(Double inc, Double dec, String names) {
-        if (inc == null && dec == null) {
-            return null;
-        }
-        if (inc == null || dec == null) {
-            throw new IllegalArgumentException("give both " + names);
-        }
-        return new FieldDirection(inc, dec);
     }
 }
