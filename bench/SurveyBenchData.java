@@ -4,13 +4,19 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.Locale;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Random;
+import org.halyard.model.Dipole;
+import org.halyard.model.FieldDirection;
 
 /**
  * Writes a synthetic survey for bench/survey.sh: N samples at 10 Hz, 2 m/s, two sensors 1.5 m apart,
  * north-south traverse lines 5 m apart with east-west tie lines, a smooth field, line offsets and a
- * diurnal; plus a 1-second IAGA-2002 base file covering it. Fixed seed. Usage:
- * java SurveyBenchData.java SAMPLES OUTDIR
+ * diurnal; plus a 1-second IAGA-2002 base file covering it. With DIPOLES > 0, that many induced point
+ * dipoles (0.2 to 6 A m2, 0 to 2 m below the seabed, uniform over the area; forward model of
+ * org.halyard.model.Dipole) are added, and their truth goes to dipoles.csv. Fixed seed. Usage:
+ * java -cp halyard.jar SurveyBenchData.java SAMPLES OUTDIR [DIPOLES]
  */
 public class SurveyBenchData {
     public static void main(String[] a) throws Exception {
@@ -26,6 +32,8 @@ public class SurveyBenchData {
         Random rnd = new Random(1);
         double t = t0;
         double width = (traverse - 1) * 5.0;
+        List<Dipole> dipoles = dipoles(a.length > 2 ? Integer.parseInt(a[2]) : 0, width, lineLen, out);
+        FieldDirection earth = new FieldDirection(69.4, -1.7);
         try (BufferedWriter w = Files.newBufferedWriter(out.resolve("lines.csv"))) {
             w.write("line,time,x,y,altitude,depth,mag_port,mag_stbd\n");
             StringBuilder sb = new StringBuilder(128);
@@ -35,6 +43,8 @@ public class SurveyBenchData {
                 double off = tie ? 0 : 4 * (rnd.nextDouble() - 0.5);
                 String id = tie ? String.format("T%02d", l - traverse + 1) : String.format("L%04d", l);
                 int count = tie ? (int) (width / (v * dt)) + 1 : perLine;
+                final double lineX = l * 5.0;
+                List<Dipole> near = tie ? dipoles : dipoles.stream().filter(p -> Math.abs(p.x() - lineX) < 25).toList();
                 for (int i = 0; i < count && written < n; i++, written++) {
                     double x, y, sx, sy;
                     if (tie) {
@@ -47,12 +57,14 @@ public class SurveyBenchData {
                         sx = (l % 2 == 0) ? 0.75 : -0.75; sy = 0;
                     }
                     double d = diurnal(t - t0);
-                    double fp = field(x - sx, y - sy) + d + off, fs = field(x + sx, y + sy) + d + off;
+                    double alt = 2.0 + 0.3 * Math.sin(i / 500.0);
+                    double fp = field(x - sx, y - sy) + d + off + anomaly(near, x - sx, y - sy, 25 - alt, earth);
+                    double fs = field(x + sx, y + sy) + d + off + anomaly(near, x + sx, y + sy, 25 - alt, earth);
                     sb.setLength(0);
                     sb.append(id).append(',').append(Instant.ofEpochMilli(Math.round(t * 1000))).append(',');
                     fixed(sb, 431000 + x, 3).append(',');
                     fixed(sb, 6120000 + y, 3).append(',');
-                    fixed(sb, 2.0 + 0.3 * Math.sin(i / 500.0), 2).append(",25.00,");
+                    fixed(sb, alt, 2).append(",25.00,");
                     fixed(sb, fp, 3).append(',');
                     fixed(sb, fs, 3);
                     w.append(sb).append('\n');
@@ -91,6 +103,36 @@ public class SurveyBenchData {
         sb.append(q / scale).append('.');
         String f = Long.toString(q % scale + scale);
         return sb.append(f, 1, f.length());
+    }
+
+    /** Random induced dipoles in the local frame (x east, y north from the first line's start, z down from the sea surface). */
+    static List<Dipole> dipoles(int count, double width, double length, Path out) throws Exception {
+        List<Dipole> list = new ArrayList<>();
+        if (count <= 0) {
+            return list;
+        }
+        Random rnd = new Random(7);
+        FieldDirection earth = new FieldDirection(69.4, -1.7);
+        StringBuilder csv = new StringBuilder("id,x,y,depth_m,moment_am2\n");
+        for (int k = 0; k < count; k++) {
+            double x = rnd.nextDouble() * width, y = 100 + rnd.nextDouble() * (length - 200);
+            double z = 25 + 2 * rnd.nextDouble(), m = 0.2 + 5.8 * rnd.nextDouble();
+            list.add(Dipole.along(x, y, z, m, earth));
+            csv.append(String.format(Locale.ROOT, "B%04d,%.2f,%.2f,%.2f,%.3f%n", k + 1, 431000 + x, 6120000 + y, z, m));
+        }
+        Files.writeString(out.resolve("dipoles.csv"), csv);
+        return list;
+    }
+
+    /** Sum of the dipoles' total-field anomalies within 25 m horizontally, nT (sensor depth z, m, down). */
+    static double anomaly(List<Dipole> dipoles, double x, double y, double z, FieldDirection f) {
+        double sum = 0;
+        for (Dipole p : dipoles) {
+            if (Math.abs(p.x() - x) < 25 && Math.abs(p.y() - y) < 25) {
+                sum += p.totalField(x, y, z, f);
+            }
+        }
+        return sum;
     }
 
     static double diurnal(double s) {

@@ -9,7 +9,8 @@ work="${BENCH_DIR:-/tmp/halyard-bench-survey}"
 mkdir -p "$work"
 if [ ! -f "$work/lines-$n.done" ]; then
   echo "generating $n samples in $work ..." >&2
-  java -Xmx512m "$root/bench/SurveyBenchData.java" "$n" "$work"
+  (cd "$root" && ./halyard --version >/dev/null)   # builds the jar the generator uses
+  java -Xmx512m -cp "$root/plugin-ui/target/halyard.jar" "$root/bench/SurveyBenchData.java" "$n" "$work"
   touch "$work/lines-$n.done"
 fi
 ls -l "$work/lines.csv" "$work/base.iaga2002" >&2

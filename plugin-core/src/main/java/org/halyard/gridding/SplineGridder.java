@@ -27,8 +27,8 @@ import org.halyard.grid.Progress;
  * GMT {@code surface} at equal tension is checked in {@code SplineGridderGmtTest}.
  *
  * <p><b>Limitations:</b> one sample per node at the finest level (the cell's merged sample), so detail finer
- * than a cell is lost; tension must be below 1; memory about 15 bytes per internal node plus 30 per cell
- * ({@link #requiredBytes(GridGeometry, long)}).
+ * than a cell is lost; tension must be below 1; memory about 15 bytes per internal node, 30 per cell and
+ * 8 per input sample ({@link #requiredBytes(GridGeometry, long)}), then 64 per merged sample.
  *
  * <p><b>Thread safety:</b> the static methods may be called from any thread; each solve uses the common
  * fork-join pool (both cores).
@@ -133,25 +133,44 @@ public final class SplineGridder {
     }
 
     /**
-     * Memory a solve needs, bytes, for {@code samples} input samples on {@code geometry}: the double and
-     * int lattices of the two finest levels, the reduction's sort arrays and the blanking arrays.
+     * Memory a solve needs before its samples are merged, bytes, for {@code samples} input samples on
+     * {@code geometry}: the double and int lattices of the two finest levels, the per-cell arrays (merged
+     * samples, data mask, blanking) and the merge's sort arrays, which hold 8 bytes a sample while one
+     * reduction runs (values and the two gradient components are reduced one after another).
      */
     public static long requiredBytes(GridGeometry geometry, long samples) {
         CoarseningLayout layout = CoarseningLayout.of(geometry.columns(), geometry.rows());
         long nodes = (long) (layout.columns() + 4) * (layout.rows() + 4);
-        return nodes * 15 + (long) geometry.size() * 30 + samples * 40;
+        return nodes * 15 + (long) geometry.size() * 30 + samples * 8;
     }
 
-    private static void requireMemory(GridGeometry geometry, long samples) {
-        long need = requiredBytes(geometry, samples);
-        Runtime rt = Runtime.getRuntime();
-        long free = rt.maxMemory() - (rt.totalMemory() - rt.freeMemory());
+    /** Memory of the solve once the samples are merged: lattices and 64 bytes per placed sample. */
+    private static long solveBytes(CoarseningLayout layout, GridGeometry geometry, long placed) {
+        long nodes = (long) (layout.columns() + 4) * (layout.rows() + 4);
+        return nodes * 15 + (long) geometry.size() * 12 + placed * 64;
+    }
+
+    /**
+     * Refuses a solve that would not fit in the heap, with what it needs. Garbage left by earlier stages
+     * counts as used until collected, so a shortfall is confirmed after one collection.
+     */
+    private static void requireMemory(GridGeometry geometry, long samples, long need) {
+        if (need <= freeBytes()) {
+            return;
+        }
+        System.gc();
+        long free = freeBytes();
         if (need > free) {
             throw new IllegalArgumentException(String.format(java.util.Locale.ROOT,
                     "a grid of %d x %d cells from %d samples needs about %d MB of memory but only %d MB is free;"
                             + " use a larger cell or give Java more memory (-Xmx)", geometry.columns(),
                     geometry.rows(), samples, need >> 20, free >> 20));
         }
+    }
+
+    private static long freeBytes() {
+        Runtime rt = Runtime.getRuntime();
+        return rt.maxMemory() - (rt.totalMemory() - rt.freeMemory());
     }
 
     private GriddingResult solve(double[] x, double[] y, double[] value, GradientSamples gradients) {
@@ -163,7 +182,9 @@ public final class SplineGridder {
             throw new IllegalArgumentException("a spline grid needs at least 3 x 3 cells, got "
                     + geometry.columns() + " x " + geometry.rows() + "; use a smaller cell");
         }
-        requireMemory(geometry, x.length + (gradients == null ? 0 : 2L * gradients.size()));
+        long samples = x.length + (gradients == null ? 0 : 2L * gradients.size());
+        requireMemory(geometry, samples, requiredBytes(geometry, Math.max(x.length,
+                gradients == null ? 0 : gradients.size())));
         progress.report(0);
         ReducedSamples data = BlockReduction.reduce(x, y, value, geometry, options.statistic());
         int used = x.length - data.nonFinite() - data.outside();
@@ -200,6 +221,7 @@ public final class SplineGridder {
                 : options.convergenceLimit();
         CoarseningLayout layout = CoarseningLayout.of(geometry.columns(), geometry.rows());
         int n = data.size() + (pseudo == null ? 0 : pseudo.size());
+        requireMemory(geometry, samples, solveBytes(layout, geometry, n));
         double[] fi = new double[n], fj = new double[n], v = new double[n];
         place(data, layout, fi, fj, v, 0);
         if (pseudo != null) {

@@ -2,7 +2,6 @@ package org.halyard.pipeline;
 
 import java.util.Arrays;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 import org.halyard.grid.Progress;
@@ -54,8 +53,7 @@ final class LinesStage implements Stage {
             ctx.field = f.direction();
             ctx.fieldIntensityNt = f.intensityNt();
             if (r.field() == null) {
-                ctx.note(String.format(Locale.ROOT, "field direction from %s: inclination %.2f, declination %.2f degrees",
-                        f.source(), f.direction().inclinationDeg(), f.direction().declinationDeg()));
+                ctx.note(f.source()); // the estimate's own sentence names the station and the numbers
             }
         } else {
             ctx.note("field direction unknown: no field block and no usable base station; reduction to pole skipped");
