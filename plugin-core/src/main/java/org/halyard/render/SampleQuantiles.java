@@ -66,8 +66,10 @@ public final class SampleQuantiles {
         if (Double.isNaN(value) || sorted.length == 0) {
             return Double.NaN;
         }
-        int lo = lowerBound((float) value);
-        int hi = upperBound((float) value);
+        float v = (float) value;
+        int lo = lowerBound(v);
+        // Interpolated values rarely equal a sample, and then no second search is needed.
+        int hi = lo < sorted.length && sorted[lo] == v ? upperBound(v) : lo;
         return (lo + 0.5 * (hi - lo)) / sorted.length;
     }
 

@@ -1,8 +1,10 @@
 package org.halyard.sheet;
 
 import java.awt.image.BufferedImage;
+import java.awt.image.DataBufferInt;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.stream.IntStream;
 import org.halyard.grid.Grid;
 
 /**
@@ -19,7 +21,8 @@ import org.halyard.grid.Grid;
  * <p><b>Limitations:</b> the half cell between the outermost cell centres and the grid edge is left
  * blank, as bilinear interpolation is undefined there.
  *
- * <p><b>Thread safety:</b> stateless.
+ * <p><b>Thread safety:</b> stateless; rows are computed on the common fork-join pool, so the layer's
+ * colour scale must be safe to call from several threads (the render stretches and ramps are immutable).
  */
 public final class RasterImage {
 
@@ -56,13 +59,16 @@ public final class RasterImage {
         for (int top = 0; top < h; top += rowsPerStrip) {
             int n = Math.min(rowsPerStrip, h - top);
             BufferedImage img = new BufferedImage(w, n, BufferedImage.TYPE_INT_ARGB);
-            for (int r = 0; r < n; r++) {
-                double y = y1 - (top + r + 0.5) * metresPerPixel;
+            int[] argb = ((DataBufferInt) img.getRaster().getDataBuffer()).getData();
+            final int first = top;
+            // Rows are independent and each writes only its own pixels: both cores, same bytes.
+            IntStream.range(0, n).parallel().forEach(r -> {
+                double y = y1 - (first + r + 0.5) * metresPerPixel;
                 for (int c = 0; c < w; c++) {
                     double v = g.valueAt(x0 + (c + 0.5) * metresPerPixel, y);
-                    img.setRGB(c, r, Double.isNaN(v) ? 0 : 0xFF000000 | layer.colours().rgb(v));
+                    argb[r * w + c] = Double.isNaN(v) ? 0 : 0xFF000000 | layer.colours().rgb(v);
                 }
-            }
+            });
             double stripTop = y1 - top * metresPerPixel;
             double stripBottom = y1 - (top + n) * metresPerPixel;
             float px = window.pageX(x0);
