@@ -15,8 +15,10 @@ import org.halyard.grid.Grid;
  * @param convergenceLimit convergence limit applied, unit of the values
  * @param sweeps           relaxation sweeps over all levels
  * @param converged        whether every level met the limit before its sweep cap
+ * @param lastChange       largest change of any node in the finest level's last sweep, unit of the values:
+ *                         below {@code convergenceLimit} when converged, else how far from settled it stopped
  */
 public record GriddingResult(Grid grid, int samplesUsed, int nonFinite, int outside, int constrainedNodes,
                              int gradientNodes, double blankDistance, double convergenceLimit, int sweeps,
-                             boolean converged) {
+                             boolean converged, double lastChange) {
 }

@@ -238,7 +238,7 @@ public final class SplineGridder {
         double blank = blank(out, dataCells);
         progress.report(100);
         return new GriddingResult(Grid.wrap(geometry, out), used, data.nonFinite(), data.outside(), data.size(),
-                pseudo == null ? 0 : pseudo.size(), blank, limit, s.sweeps, s.converged);
+                pseudo == null ? 0 : pseudo.size(), blank, limit, s.sweeps, s.converged, s.lastChange);
     }
 
     private void place(ReducedSamples r, CoarseningLayout layout, double[] fi, double[] fj, double[] v, int offset) {
@@ -249,7 +249,7 @@ public final class SplineGridder {
         }
     }
 
-    private record Solve(TensionSplineRelaxation finest, int sweeps, boolean converged) {
+    private record Solve(TensionSplineRelaxation finest, int sweeps, boolean converged, double lastChange) {
     }
 
     private Solve relaxLevels(CoarseningLayout layout, double[] fi, double[] fj, double[] v, double limit,
@@ -262,6 +262,7 @@ public final class SplineGridder {
         TensionSplineRelaxation level = null;
         int sweeps = 0;
         boolean converged = true;
+        double lastChange = Double.NaN;
         double[] li = new double[v.length], lj = new double[v.length];
         for (int l = layout.halvings(); l >= 0; l--) {
             int stride = layout.stride(l);
@@ -284,6 +285,7 @@ public final class SplineGridder {
             for (int k = 0; k < options.maxSweeps(); k++) {
                 p.checkCanceled();
                 double change = level.sweep();
+                lastChange = change;
                 sweeps++;
                 if (change <= limit) {
                     met = true;
@@ -301,7 +303,7 @@ public final class SplineGridder {
             done += share;
             p.report(100 * done);
         }
-        return new Solve(level, sweeps, converged);
+        return new Solve(level, sweeps, converged, lastChange);
     }
 
     /** Least-squares plane through the samples, on the coarsest level. */

@@ -58,7 +58,9 @@ final class GridStage implements Stage {
         ctx.log().param("gradient-enhanced", gradients != null);
         ctx.log().param("converged", res.converged());
         if (!res.converged()) {
-            ctx.note("gridding stopped at its sweep limit before the convergence limit; the grid may be rough");
+            ctx.note(String.format(java.util.Locale.ROOT, "gridding stopped at its sweep limit before the convergence"
+                    + " limit: the last sweep still moved a node by %.3g against a limit of %.3g (unit of the data)",
+                    res.lastChange(), res.convergenceLimit()));
         }
         if (gradients != null) {
             MeasuredGradientAnalyticSignal m = MeasuredGradientAnalyticSignal.compute(gradients, geometry, options,

@@ -48,6 +48,12 @@ class SplineGridderTest {
                     org.assertj.core.data.Offset.offset(res.convergenceLimit() + 1e-6 * Math.abs(mean / m)));
         }
         assertThat(res.converged()).isTrue();
+        assertThat(res.lastChange()).isLessThanOrEqualTo(res.convergenceLimit());
+        // The same data with one sweep a level cannot settle: the result says how far from settled it is.
+        GriddingResult capped = SplineGridder.grid(x, y, v, g, GriddingOptions.defaults()
+                .withBlankDistance(Double.POSITIVE_INFINITY).withMaxSweeps(1), null);
+        assertThat(capped.converged()).isFalse();
+        assertThat(capped.lastChange()).isGreaterThan(capped.convergenceLimit());
     }
 
     @Test

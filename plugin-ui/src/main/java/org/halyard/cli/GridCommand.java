@@ -104,7 +104,9 @@ final class GridCommand implements Callable<Integer> {
         System.err.printf(Locale.ROOT, "%s: %d x %d cells of %s m from %d samples (%d rows skipped for empty or NaN"
                         + " numbers)%s; blanked beyond %.3f m%s%n", out, g.columns(), g.rows(), fmt(cell), r.samplesUsed(),
                 t.skipped + r.nonFinite(), r.gradientNodes() > 0 ? ", " + r.gradientNodes() + " nodes from gradients" : "",
-                r.blankDistance(), r.converged() ? "" : "; warning: not converged to the limit, raise --limit or check the data");
+                r.blankDistance(), r.converged() ? "" : String.format(Locale.ROOT, "; warning: not converged to the limit (the last sweep still"
+                        + " moved a node by %.3g against %.3g), raise --limit or check the data", r.lastChange(),
+                        r.convergenceLimit()));
         return 0;
     }
 
