@@ -41,9 +41,8 @@ public final class LinearFeaturesProcess implements HalyardProcess {
         ListenerProgress p = ListenerProgress.of(monitor);
         p.listener().started();
         LinearFeatureOptions d = LinearFeatureOptions.DEFAULT;
-        LinearFeatureOptions o = new LinearFeatureOptions(FeatureTableBuilder.or(k, d.thresholdFactor()),
-                d.minAnisotropy(), d.maxAlongSlope(), d.maxTurnDeg(), FeatureTableBuilder.or(minLength, d.minLengthM()),
-                d.maxGapM(), d.maxDeviationDeg(), d.vertexSpacingM(), d.labelDistanceM(), d.dominance());
+        LinearFeatureOptions o = d.withThresholdAndLength(FeatureTableBuilder.or(k, d.thresholdFactor()),
+                FeatureTableBuilder.or(minLength, d.minLengthM()));
         FeatureTableBuilder out = new FeatureTableBuilder("linear_features", LineString.class,
                 data.getCoordinateReferenceSystem2D(), "id", Integer.class, "length_m", Double.class,
                 "azimuth_deg", Double.class, "amplitude", Double.class);

@@ -42,6 +42,9 @@ import org.locationtech.jts.simplify.DouglasPeuckerSimplifier;
  */
 public final class LinearFeatureDetector {
 
+    /** Side of the tiles of the local level, m: several times a cable's ridge width. */
+    static final double BACKGROUND_TILE_M = 20;
+
     /** Smallest piece considered for merging, cells along its axis. */
     static final int MIN_PIECE_CELLS = 3;
 
@@ -55,8 +58,10 @@ public final class LinearFeatureDetector {
      * @param progress reports 0 to 100 and is checked for cancellation between steps
      */
     public static List<LinearFeature> detect(Grid analyticSignal, LinearFeatureOptions o, Progress progress) {
-        double threshold = NoiseEstimate.of(analyticSignal).threshold(o.thresholdFactor());
-        RidgeCells ridges = RidgeCells.find(analyticSignal, threshold, o);
+        NoiseEstimate noise = NoiseEstimate.of(analyticSignal);
+        Grid smooth = GaussianSmoother.smooth(analyticSignal, o.smoothingM());
+        LocalBackground level = LocalBackground.of(smooth, BACKGROUND_TILE_M, noise.background());
+        RidgeCells ridges = RidgeCells.find(smooth, level, o.thresholdFactor() * noise.sigma(), o);
         progress.report(40);
         progress.checkCanceled();
         List<RidgePiece> pieces = merge(link(ridges, o), ridges, o);

@@ -14,13 +14,24 @@ package org.halyard.targets;
  * @param vertexSpacingM   spacing of the polyline vertices before simplification, m
  * @param labelDistanceM   a pick this close to a feature is labelled {@code linear}, m
  * @param dominance        ...unless its amplitude exceeds this times the feature's median amplitude
+ * @param smoothingM       standard deviation of the Gaussian applied before the ridge test, m: about half the
+ *                         survey's sensor-track spacing, to join the beads that line data leave along a ridge
+ *                         (0 for none)
+ * @param minEulerShare    a ridge is kept as a feature only where Euler deconvolution with the line-source
+ *                         index gives an accepted depth at this share of its stations, 0 to 1 (0 keeps every
+ *                         ridge); used where the field grids are known ({@link TargetAnalysis})
  */
 public record LinearFeatureOptions(double thresholdFactor, double minAnisotropy, double maxAlongSlope,
                                    double maxTurnDeg, double minLengthM, double maxGapM, double maxDeviationDeg,
-                                   double vertexSpacingM, double labelDistanceM, double dominance) {
+                                   double vertexSpacingM, double labelDistanceM, double dominance,
+                                   double smoothingM, double minEulerShare) {
 
-    /** Defaults for sensors 1 to 5 m above the objects, cells of 0.25 to 1 m (common practice). */
-    public static final LinearFeatureOptions DEFAULT = new LinearFeatureOptions(5, 3, 0.1, 20, 20, 8, 25, 2, 2, 2);
+    /**
+     * Defaults for sensors 1 to 5 m above the objects, cells of 0.25 to 1 m, sensor tracks 1 to 3 m apart
+     * (common practice); the gap bridges two lines of a 3 m line spacing and more.
+     */
+    public static final LinearFeatureOptions DEFAULT = new LinearFeatureOptions(5, 3, 0.1, 20, 20, 8, 25, 2, 3, 2,
+            1.0, 0.5);
 
     public LinearFeatureOptions {
         requirePositive(thresholdFactor, "ridge threshold factor");
@@ -33,10 +44,22 @@ public record LinearFeatureOptions(double thresholdFactor, double minAnisotropy,
         if (!(minAnisotropy >= 1)) {
             throw new IllegalArgumentException("minimum ridge anisotropy must be at least 1, got " + minAnisotropy);
         }
+        if (!(minEulerShare >= 0 && minEulerShare <= 1)) {
+            throw new IllegalArgumentException("Euler share must be between 0 and 1, got " + minEulerShare);
+        }
+        if (!(smoothingM >= 0)) {
+            throw new IllegalArgumentException("ridge smoothing must be 0 m or more, got " + smoothingM);
+        }
         if (!(maxGapM >= 0) || !(labelDistanceM >= 0)) {
             throw new IllegalArgumentException("gap and label distances must be 0 m or more, got " + maxGapM
                     + " and " + labelDistanceM);
         }
+    }
+
+    /** The same options with another ridge threshold factor and shortest length (the process's parameters). */
+    public LinearFeatureOptions withThresholdAndLength(double k, double minLength) {
+        return new LinearFeatureOptions(k, minAnisotropy, maxAlongSlope, maxTurnDeg, minLength, maxGapM,
+                maxDeviationDeg, vertexSpacingM, labelDistanceM, dominance, smoothingM, minEulerShare);
     }
 
     private static void requirePositive(double v, String what) {

@@ -10,12 +10,16 @@ import org.halyard.grid.Progress;
 /**
  * Picks the local maxima of a grid that stand above a noise-adaptive threshold.
  *
- * <p><b>Algorithm:</b> the threshold is {@code median + k x 1.4826 MAD} of the grid ({@link NoiseEstimate}).
- * A cell is a candidate when it exceeds the threshold and is the largest in a square window (ties go to
- * the first cell in row-major order, so a flat top yields one candidate). Candidates are taken strongest
- * first and one closer than the minimum separation to a stronger pick is dropped. The position is refined
- * by a parabola through the cell and its two neighbours along each axis (common practice), clamped to
- * half a cell.
+ * <p><b>Algorithm:</b> the noise sigma is the fourth-difference figure of {@link NoiseEstimate}. Maxima are
+ * sought on the grid smoothed by a Gaussian of one cell ({@link GaussianSmoother}), which removes the
+ * cell-scale texture of gridded line data that would otherwise give false maxima. A cell is a candidate
+ * when its smoothed value exceeds the local level ({@link LocalBackground}, medians of
+ * {@value #BACKGROUND_TILE_M} m tiles) by {@code k sigma} and is the largest of the smoothed grid in a
+ * square window (ties go to the first cell in row-major order, so a flat top yields one candidate).
+ * Candidates are taken strongest first and one closer than the minimum separation to a stronger pick is
+ * dropped. The position is refined by a parabola through the cell and its two neighbours along each axis
+ * of the smoothed grid (common practice), clamped to half a cell; the amplitude is the vertex of the
+ * same parabolas on the grid as given.
  *
  * <p><b>Accuracy:</b> the parabola is exact for a quadratic peak; for analytic-signal peaks sampled at a
  * quarter of the source depth or finer, the bias is a few hundredths of a cell.
@@ -27,6 +31,11 @@ import org.halyard.grid.Progress;
  */
 public final class PeakPicker {
 
+    /** Side of the tiles of the local level, m: several times the width of a compact anomaly. */
+    static final double BACKGROUND_TILE_M = 10;
+    /** Standard deviation of the smoothing before the maximum test, cells. */
+    static final double SMOOTHING_CELLS = 1;
+
     private PeakPicker() {
     }
 
@@ -35,7 +44,8 @@ public final class PeakPicker {
      *
      * @param peaks     picks, strongest first
      * @param noise     the robust level and spread of the grid, in its unit
-     * @param threshold the level a pick had to exceed, in the grid's unit
+     * @param threshold the level a pick had to exceed where the local level equals the grid's median, in the
+     *                  grid's unit
      */
     public record Result(List<Peak> peaks, NoiseEstimate noise, double threshold) {
         public Result {
@@ -51,14 +61,17 @@ public final class PeakPicker {
     public static Result pick(Grid grid, PeakOptions options, Progress progress) {
         NoiseEstimate noise = NoiseEstimate.of(grid);
         double threshold = noise.threshold(options.thresholdFactor());
+        double rise = threshold - noise.background();
+        Grid smooth = GaussianSmoother.smooth(grid, SMOOTHING_CELLS * grid.geometry().cellSize());
+        LocalBackground level = LocalBackground.of(smooth, BACKGROUND_TILE_M, noise.background());
         List<Peak> candidates = new ArrayList<>();
         int w = options.windowCells();
         for (int r = 0; r < grid.rows(); r++) {
             progress.checkCanceled();
             for (int c = 0; c < grid.columns(); c++) {
-                float v = grid.get(c, r);
-                if (v > threshold && isWindowMaximum(grid, c, r, w)) {
-                    candidates.add(refine(grid, c, r));
+                float v = smooth.get(c, r);
+                if (v > level.at(c, r) + rise && isWindowMaximum(smooth, c, r, w)) {
+                    candidates.add(refine(smooth, grid, c, r));
                 }
             }
             progress.report(90.0 * (r + 1) / grid.rows());
@@ -84,8 +97,17 @@ public final class PeakPicker {
         return true;
     }
 
-    private static Peak refine(Grid g, int c, int r) {
-        GridGeometry geo = g.geometry();
+    /** Position from the parabolas of {@code pos} at (c, r), amplitude from those of {@code amp}. */
+    private static Peak refine(Grid pos, Grid amp, int c, int r) {
+        GridGeometry geo = pos.geometry();
+        double[][] p = parabolas(pos, c, r), a = parabolas(amp, c, r);
+        double x = geo.x(c) + p[0][0] * geo.cellSize();
+        double y = geo.y(r) - p[1][0] * geo.cellSize();
+        return new Peak(x, y, amp.get(c, r) + a[0][1] + a[1][1], c, r);
+    }
+
+    /** The {@link #vertex} along the row and down the column at (c, r); {0, 0} on the edges. */
+    private static double[][] parabolas(Grid g, int c, int r) {
         double v = g.get(c, r);
         double[] along = {0, 0};
         double[] down = {0, 0};
@@ -95,9 +117,7 @@ public final class PeakPicker {
         if (r > 0 && r < g.rows() - 1) {
             down = vertex(g.get(c, r - 1), v, g.get(c, r + 1));
         }
-        double x = geo.x(c) + along[0] * geo.cellSize();
-        double y = geo.y(r) - down[0] * geo.cellSize();
-        return new Peak(x, y, v + along[1] + down[1], c, r);
+        return new double[][] {along, down};
     }
 
     /**

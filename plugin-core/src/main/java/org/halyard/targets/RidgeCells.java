@@ -32,9 +32,10 @@ public final class RidgeCells {
     }
 
     /**
-     * Finds the ridge cells of {@code grid} (any unit; x east, y north, row 0 north) above {@code threshold}.
+     * Finds the ridge cells of {@code grid} (any unit; x east, y north, row 0 north) that stand more than
+     * {@code rise} above the local level {@code level} (same unit).
      */
-    public static RidgeCells find(Grid grid, double threshold, LinearFeatureOptions o) {
+    static RidgeCells find(Grid grid, LocalBackground level, double rise, LinearFeatureOptions o) {
         GridGeometry geo = grid.geometry();
         double h = geo.cellSize();
         boolean[] ridge = new boolean[geo.size()];
@@ -42,7 +43,7 @@ public final class RidgeCells {
         for (int r = 1; r < geo.rows() - 1; r++) {
             for (int c = 1; c < geo.columns() - 1; c++) {
                 double f = grid.get(c, r);
-                if (!(f > threshold)) {
+                if (!(f > level.at(c, r) + rise)) {
                     continue;
                 }
                 double e = grid.get(c + 1, r), w = grid.get(c - 1, r);

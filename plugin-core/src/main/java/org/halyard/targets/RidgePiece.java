@@ -75,7 +75,7 @@ final class RidgePiece {
 
     /**
      * Whether {@code other} continues this piece: axes within {@code maxTurnDeg}, a gap between their nearest
-     * ends of at most {@code maxGap} or the shorter piece's length (or overlapping), and each of the two facing ends within
+     * ends of at most {@code maxGap} or the pieces' mean length (or overlapping), and each of the two facing ends within
      * {@code maxOffset} of the other piece's axis.
      */
     boolean continues(RidgePiece other, double maxTurnDeg, double maxGap, double maxOffset) {
@@ -100,9 +100,10 @@ final class RidgePiece {
         double offset = Math.max(across(b[bj], b[bj + 1]), other.across(a[ai], a[ai + 1]));
         boolean overlapping = other.along(a[0], a[1]) * other.along(a[2], a[3]) < 0
                 || along(b[0], b[1]) * along(b[2], b[3]) < 0;
-        // A gap no longer than the shorter piece is bridged too: a strong object lying on a cable hides the
-        // ridge over a few times its depth, and both sides then stay long and collinear.
-        double allowed = Math.max(maxGap, Math.min(length(), other.length()));
+        // A gap up to the mean length of the two pieces is bridged too: a strong object lying on a cable, or
+        // a crossing pipe, hides the ridge over a few times its depth or width, and both sides stay long and
+        // collinear. The offset test keeps the bridge straight: 2 m over 40 m is 3 degrees.
+        double allowed = Math.max(maxGap, 0.5 * (length() + other.length()));
         return (gap <= allowed || overlapping) && offset <= maxOffset;
     }
 

@@ -17,7 +17,9 @@ import org.locationtech.jts.linearref.LengthIndexedLine;
  * features matched to charted infrastructure.
  *
  * <p><b>Algorithm:</b> linear features first ({@link LinearFeatureDetector}), each with a median Euler
- * depth (structural index 2) every {@value #FEATURE_STEP_M} m along it and an asset match; then peaks
+ * depth (structural index 2) from stations every {@value #FEATURE_STEP_M} m along it and an asset match; a
+ * ridge where fewer stations than {@link LinearFeatureOptions#minEulerShare} give an accepted depth is not a
+ * line source (the texture of gridded, levelled lines) and is dropped with a note; then peaks
  * ({@link PeakPicker}). A peak within the label distance of a feature, and not much stronger than it, is
  * class {@code linear} (Euler SI 2, the feature's asset); any other is {@code discrete}: Euler SI 3, a
  * dipole fit to the line samples started from the Euler solution (the fields of stronger picks already
@@ -48,12 +50,30 @@ public final class TargetAnalysis {
         Grid as = in.pickGrid();
         AssetMatcher matcher = new AssetMatcher(in.assets(), o.assetBufferM(), o.assetMinShare());
         List<LinearFeature> features = new ArrayList<>();
+        List<LinearFeature> texture = new ArrayList<>();
         for (LinearFeature f : LinearFeatureDetector.detect(as, o.linear(), p.slice(0, 30))) {
-            features.add(f.withDepth(featureDepth(in.grids(), f.line(), o.linearEuler()))
-                    .withAsset(matcher.match(f.line())));
+            double[] depths = stationDepths(in.grids(), f.line(), o.linearEuler());
+            if (depths.length < o.linear().minEulerShare() * stationCount(f.line())) {
+                texture.add(f);
+                continue;
+            }
+            features.add(new LinearFeature(features.size() + 1, f.line(), f.amplitude(),
+                    depths.length == 0 ? Double.NaN : NoiseEstimate.median(depths), matcher.match(f.line())));
         }
+        GeometryFactory gf = new GeometryFactory();
         PeakPicker.Result peaks = PeakPicker.pick(as, o.peaks(), p.slice(30, 40));
-        if (peaks.peaks().isEmpty()) {
+        // Maxima strung along a texture ridge are beads of that ridge: dropped like the ridge, unless they
+        // stand out of it as an object on a cable does.
+        List<Peak> list = peaks.peaks().stream()
+                .filter(pk -> nearestFeature(pk, texture, o.linear(), gf).isEmpty()).toList();
+        if (!texture.isEmpty()) {
+            notes.add(String.format(java.util.Locale.ROOT, "%d analytic-signal ridge%s and the %d peaks along them"
+                    + " dropped: Euler deconvolution (SI %.0f) accepted a depth at fewer than %.0f%% of the stations"
+                    + " along each (not a line source: texture of the gridded lines)", texture.size(),
+                    texture.size() == 1 ? "" : "s", peaks.peaks().size() - list.size(),
+                    o.linearEuler().structuralIndex(), 100 * o.linear().minEulerShare()));
+        }
+        if (list.isEmpty()) {
             notes.add(String.format(java.util.Locale.ROOT,
                     "no peaks: the analytic signal nowhere exceeds the threshold %.4g nT/m (median %.4g + %.3g x noise %.4g)",
                     peaks.threshold(), peaks.noise().background(), o.peaks().thresholdFactor(), peaks.noise().sigma()));
@@ -66,11 +86,9 @@ public final class TargetAnalysis {
         if (in.samples().size() == 0) {
             notes.add("no line samples: no dipole fits, so no moments or masses");
         }
-        GeometryFactory gf = new GeometryFactory();
         List<Target> targets = new ArrayList<>();
         SampleIndex index = new SampleIndex(in.samples(), o.fit().radiusM());
         List<Dipole> fitted = new ArrayList<>();
-        List<Peak> list = peaks.peaks();
         for (int k = 0; k < list.size(); k++) {
             p.slice(40, 100).report(100.0 * k / list.size());
             p.checkCanceled();
@@ -145,19 +163,26 @@ public final class TargetAnalysis {
         return Optional.ofNullable(best);
     }
 
-    /** Median accepted Euler depth at points every {@value #FEATURE_STEP_M} m along the line; NaN if none. */
-    static double featureDepth(FieldGrids grids, LineString line, EulerOptions eo) {
+    /** Number of Euler stations along a line: its ends and every {@value #FEATURE_STEP_M} m or so between. */
+    static int stationCount(LineString line) {
+        return Math.max(1, (int) Math.floor(line.getLength() / FEATURE_STEP_M)) + 1;
+    }
+
+    /**
+     * Accepted Euler depths (m below the observation level, positive down) at the {@link #stationCount}
+     * stations along the line, across its local strike.
+     */
+    static double[] stationDepths(FieldGrids grids, LineString line, EulerOptions eo) {
         LengthIndexedLine idx = new LengthIndexedLine(line);
         double len = line.getLength();
-        int n = Math.max(1, (int) Math.floor(len / FEATURE_STEP_M));
+        int n = stationCount(line) - 1;
         List<Double> depths = new ArrayList<>();
         for (int i = 0; i <= n; i++) {
             Coordinate c = idx.extractPoint(len * i / n);
             EulerDeconvolution.solveAcross(grids, c.x, c.y, strikeAt(line, c.x, c.y), eo)
                     .ifPresent(s -> depths.add(s.depth()));
         }
-        return depths.isEmpty() ? Double.NaN
-                : NoiseEstimate.median(depths.stream().mapToDouble(Double::doubleValue).toArray());
+        return depths.stream().mapToDouble(Double::doubleValue).toArray();
     }
 
     /** Azimuth of the line's segment nearest (x, y), degrees clockwise from north. */

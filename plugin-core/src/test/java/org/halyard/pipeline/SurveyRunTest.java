@@ -88,8 +88,9 @@ class SurveyRunTest {
         System.out.printf("demo score: %d of %d discrete objects picked within 1.5 m (recall %.2f), median "
                 + "position error of the nearest pick %.2f m, %d picks in all%n", found, truth.size(), recall,
                 err[err.length / 2], picks.size());
-        // Regression floor at the level reached when written (8 of 20; see the issue note on demo quality).
-        assertThat(found).isGreaterThanOrEqualTo(7);
+        // Regression floor one below the level reached (11 of 20 with the fourth-difference noise and smoothed
+        // picking of issue 5; 8 before).
+        assertThat(found).isGreaterThanOrEqualTo(10);
     }
 
     @Test

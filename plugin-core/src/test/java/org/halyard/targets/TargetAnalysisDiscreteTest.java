@@ -131,7 +131,10 @@ class TargetAnalysisDiscreteTest {
         List<Double> rel = new ArrayList<>();
         for (int k : eligible()) {
             Dipole d = truth.get(k);
-            if (!induced[k]) {
+            // Moments are claimed for picks at 20x the grid noise and more: below that the 0.1 nT line noise
+            // of the fixture is a fifth of the anomaly or more and the fit may settle a metre off (design of
+            // the fixture; the 5x-noise population is the recall test's).
+            if (!induced[k] || peakAs[k] < 20 * result.noise().sigma() + result.noise().background()) {
                 continue;
             }
             Optional<Target> t = found(d);
