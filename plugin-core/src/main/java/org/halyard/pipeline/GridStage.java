@@ -27,25 +27,22 @@ final class GridStage implements Stage {
     @Override
     public void run(RunContext ctx, Progress p) {
         Recipe.GridBlock g = ctx.recipe().grid();
+        boolean[] rows = griddedRows(ctx, g.tieLines());
         List<SensorTrack> sensors = ctx.survey.sensors();
-        int n = 0;
-        for (SensorTrack s : sensors) {
-            n += s.size();
-        }
-        double[] x = new double[n], y = new double[n], v = new double[n];
+        int per = count(rows);
+        double[] x = new double[per * sensors.size()], y = new double[x.length], v = new double[x.length];
         int k = 0;
         for (SensorTrack s : sensors) {
-            System.arraycopy(s.x(), 0, x, k, s.size());
-            System.arraycopy(s.y(), 0, y, k, s.size());
-            System.arraycopy(s.value(), 0, v, k, s.size());
-            k += s.size();
+            k = pick(rows, s.x(), x, k);
+            pick(rows, s.y(), y, k - per);
+            pick(rows, s.value(), v, k - per);
         }
         GridGeometry geometry = SplineGridder.geometryFor(x, y, g.cellM(), ctx.recipe().crs());
         GriddingOptions options = GriddingOptions.defaults().withTension(g.tension());
         if (Double.isFinite(g.blankingM())) {
             options = options.withBlankDistance(g.blankingM());
         }
-        GradientSamples gradients = gradients(ctx.survey.gradients());
+        GradientSamples gradients = gradients(ctx.survey.gradients(), rows);
         GriddingResult res = gradients == null
                 ? SplineGridder.grid(x, y, v, geometry, options, p.slice(0, 60))
                 : SplineGridder.grid(x, y, v, gradients, geometry, options, p.slice(0, 60));
@@ -72,24 +69,68 @@ final class GridStage implements Stage {
         p.report(100);
     }
 
-    /** The pair gradients of every sensor pair pooled, or null when there are none. */
-    private static GradientSamples gradients(List<GradientPoints> pairs) {
-        int n = 0;
-        for (GradientPoints gp : pairs) {
-            n += gp.size();
+    /**
+     * Rows that go into the grid: every row, or with {@code tieLines} false only the traverse rows (when the
+     * survey has traverse lines at all). The run log says which.
+     */
+    private static boolean[] griddedRows(RunContext ctx, boolean tieLines) {
+        var lines = ctx.survey.lines();
+        boolean[] tie = ctx.survey.tieMask();
+        boolean[] rows = new boolean[lines.size()];
+        boolean anyTraverse = false;
+        for (int l = 0; l < lines.lineCount(); l++) {
+            anyTraverse |= !tie[l];
         }
-        if (n == 0) {
+        boolean dropTies = !tieLines && anyTraverse;
+        int dropped = 0;
+        for (int l = 0; l < lines.lineCount(); l++) {
+            boolean keep = !(dropTies && tie[l]);
+            for (int r = lines.start(l); r < lines.end(l); r++) {
+                rows[r] = keep;
+            }
+            dropped += keep ? 0 : 1;
+        }
+        ctx.log().param("tie lines gridded", dropTies ? "no (" + dropped + " tie lines used for levelling only)" : "yes");
+        return rows;
+    }
+
+    private static int count(boolean[] mask) {
+        int n = 0;
+        for (boolean b : mask) {
+            n += b ? 1 : 0;
+        }
+        return n;
+    }
+
+    /** Copies {@code from[i]} for the rows in {@code mask} to {@code to} from {@code at}; returns the next free index. */
+    private static int pick(boolean[] mask, double[] from, double[] to, int at) {
+        for (int i = 0; i < mask.length; i++) {
+            if (mask[i]) {
+                to[at++] = from[i];
+            }
+        }
+        return at;
+    }
+
+    /** The pair gradients of every sensor pair pooled over the gridded rows, or null when there are none. */
+    private static GradientSamples gradients(List<GradientPoints> pairs, boolean[] rows) {
+        if (pairs.isEmpty()) {
             return null;
         }
-        double[] x = new double[n], y = new double[n], gx = new double[n], gy = new double[n];
+        int per = count(rows);
+        double[] x = new double[per * pairs.size()], y = new double[x.length];
+        double[] gx = new double[x.length], gy = new double[x.length];
         int k = 0;
         for (GradientPoints gp : pairs) {
-            System.arraycopy(gp.x(), 0, x, k, gp.size());
-            System.arraycopy(gp.y(), 0, y, k, gp.size());
-            System.arraycopy(gp.gx(), 0, gx, k, gp.size());
-            System.arraycopy(gp.gy(), 0, gy, k, gp.size());
-            k += gp.size();
+            if (gp.size() != rows.length) {
+                throw new IllegalStateException("pair " + gp.pair() + " has " + gp.size() + " rows, the survey "
+                        + rows.length);
+            }
+            k = pick(rows, gp.x(), x, k);
+            pick(rows, gp.y(), y, k - per);
+            pick(rows, gp.gx(), gx, k - per);
+            pick(rows, gp.gy(), gy, k - per);
         }
-        return new GradientSamples(x, y, gx, gy);
+        return x.length == 0 ? null : new GradientSamples(x, y, gx, gy);
     }
 }

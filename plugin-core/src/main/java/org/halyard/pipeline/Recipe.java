@@ -55,8 +55,11 @@ public record Recipe(Path file, String name, String crs, Survey survey, Path bas
      * @param cellM     cell size, metres
      * @param tension   spline tension, 0 to 1
      * @param blankingM cells farther than this from any sample are blank, metres (NaN: the gridder's default)
+     * @param tieLines  whether tie-line samples go into the grid as well as traverse samples (default no:
+     *                  ties are the levelling datum, run across the traverse direction, and their residual
+     *                  heading and levelling misfits would stripe the grid and its derivatives)
      */
-    public record GridBlock(double cellM, double tension, double blankingM) {
+    public record GridBlock(double cellM, double tension, double blankingM, boolean tieLines) {
     }
 
     /**

@@ -99,7 +99,8 @@ public final class RecipeReader {
         Recipe.GridBlock grid = new Recipe.GridBlock(
                 g == null ? DEFAULT_CELL_M : c.number(g, "cell_m", DEFAULT_CELL_M, "grid"),
                 g == null ? 0.25 : c.number(g, "tension", 0.25, "grid"),
-                g == null ? Double.NaN : c.number(g, "blanking_m", Double.NaN, "grid"));
+                g == null ? Double.NaN : c.number(g, "blanking_m", Double.NaN, "grid"),
+                g != null && c.flag(g, "tie_lines", false, "grid"));
         if (!(grid.cellM() > 0)) {
             throw c.error("grid.cell_m", "must be a positive number of metres");
         }
@@ -167,6 +168,17 @@ public final class RecipeReader {
                 throw error(at + "." + key, "must be a number, got " + n);
             }
             return n.asDouble();
+        }
+
+        boolean flag(JsonNode parent, String key, boolean fallback, String at) {
+            JsonNode n = parent.get(key);
+            if (n == null || n.isNull()) {
+                return fallback;
+            }
+            if (!n.isBoolean()) {
+                throw error(at + "." + key, "must be true or false, got " + n);
+            }
+            return n.asBoolean();
         }
 
         Path file(Path dir, JsonNode block, String path, boolean mustExist) {
