@@ -152,8 +152,8 @@ public final class CsvTableReader implements Closeable {
      */
     public void requireFields(int n) {
         if (fieldCount < n) {
-            throw new IllegalArgumentException(file + ": line " + lineNumber + ": truncated row, "
-                    + fieldCount + " fields where the header has " + header.size());
+            String first = fieldCount < header.size() ? ", column '" + header.get(fieldCount) + "'" : "";
+            throw new IllegalArgumentException(file + ": line " + lineNumber + first + ": truncated row, " + fieldCount + " fields where the header has " + header.size());
         }
     }
 

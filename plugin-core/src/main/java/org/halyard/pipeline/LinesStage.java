@@ -44,7 +44,8 @@ final class LinesStage implements Stage {
         }
         Optional<FieldEstimate> field = r.field() == null ? Optional.empty()
                 : Optional.of(new FieldEstimate(r.field().direction(), r.field().intensityNt(), "the recipe's field block"));
-        SurveyOptions options = SurveyOptions.defaults().withField(field);
+        SurveyOptions options = SurveyOptions.defaults().withField(field).withLag(r.survey().lag())
+                .withMicroLevelling(r.survey().microLevelling());
         ProcessedSurvey ps = SurveyProcessing.run(new SurveyInput(lines, Set.copyOf(r.survey().tieLines())), options,
                 base, p.slice(40, 90));
         ps.messages().forEach(m -> ctx.log().note(m));
@@ -69,6 +70,25 @@ final class LinesStage implements Stage {
         ctx.log().param("samples", lines.size());
         ctx.log().param("crossover rms before levelling (nT)", ps.qc().before().rmsNt());
         ctx.log().param("crossover rms after levelling (nT)", ps.qc().after().rmsNt());
+        ps.lag().ifPresent(l -> {
+            if (!Double.isNaN(l.estimatedS())) {
+                ctx.log().param("lag estimated (s)", l.estimatedS());
+                ctx.log().param("lag estimate pairs of opposite lines", l.pairs());
+            }
+            if (!Double.isNaN(l.appliedS())) {
+                ctx.log().param("lag applied (s)", l.appliedS());
+                ctx.log().param("opposite-line misfit before lag shift (nT^2)", l.misfitBefore());
+                ctx.log().param("opposite-line misfit after lag shift (nT^2)", l.misfitAfter());
+            }
+        });
+        ps.microLevelling().ifPresent(m -> {
+            ctx.log().param("micro-levelling lines", m.linesCorrected());
+            ctx.log().param("micro-levelling across wavelength (m)", m.acrossWavelengthM());
+            ctx.log().param("micro-levelling along wavelength (m)", m.alongWavelengthM());
+            ctx.log().param("micro-levelling limit (nT)", m.limitNt());
+            ctx.log().param("micro-levelling correction rms (nT)", m.rmsNt());
+            ctx.log().param("micro-levelling correction max (nT)", m.maxAbsNt());
+        });
         p.report(100);
     }
 

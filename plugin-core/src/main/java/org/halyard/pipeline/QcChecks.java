@@ -41,6 +41,12 @@ final class QcChecks {
         checks.add(new QcSummary.Check("crossovers", Integer.toString(q.before().count()), "", ""));
         checks.add(new QcSummary.Check("crossover RMS before levelling", fmt("%.3f nT", q.before().rmsNt()), "", ""));
         checks.add(new QcSummary.Check("crossover RMS after levelling", fmt("%.3f nT", q.after().rmsNt()), "", ""));
+        ps.lag().filter(l -> !Double.isNaN(l.estimatedS())).ifPresent(l -> checks.add(new QcSummary.Check(
+                "lag estimated from opposite-direction lines", fmt("%.3f s", l.estimatedS()), "", "")));
+        ps.lag().filter(l -> !Double.isNaN(l.appliedS())).ifPresent(l -> checks.add(new QcSummary.Check(
+                "lag applied to the positions", fmt("%.3f s", l.appliedS()), "", "")));
+        ps.microLevelling().ifPresent(m -> checks.add(new QcSummary.Check("micro-levelling correction RMS",
+                fmt("%.3f nT", m.rmsNt()), fmt("%.2f nT", m.limitNt()), "")));
         return new QcSummary(checks, List.of("Per-line figures: report/qc_lines.csv and report/qc.html."));
     }
 

@@ -3,7 +3,10 @@ package org.halyard.pipeline;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.halyard.model.FieldDirection;
+import org.halyard.survey.LagOptions;
+import org.halyard.survey.MicroLevelling;
 import org.halyard.survey.SensorSpec;
 
 /**
@@ -32,8 +35,11 @@ public record Recipe(Path file, String name, String crs, Survey survey, Path bas
      * @param sensors  the magnetometers, in array order (offsets: across positive to starboard, along
      *                 positive forward, metres)
      * @param tieLines names of the tie lines (the levelling datum)
+     * @param lag      lag estimate and shift (the optional {@code lag} block; off without it)
+     * @param microLevelling micro-levelling settings when the {@code micro_levelling} block turns it on
      */
-    public record Survey(Path file, Map<String, String> columns, List<SensorSpec> sensors, List<String> tieLines) {
+    public record Survey(Path file, Map<String, String> columns, List<SensorSpec> sensors, List<String> tieLines,
+                         LagOptions lag, Optional<MicroLevelling.Settings> microLevelling) {
     }
 
     /**

@@ -12,7 +12,10 @@ import java.util.Iterator;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import org.halyard.io.GeoTiffGrids;
+import org.halyard.survey.LagOptions;
+import org.halyard.survey.MicroLevelling;
 import org.halyard.survey.SensorSpec;
 import org.halyard.targets.TargetOptions;
 
@@ -48,7 +51,11 @@ public final class RecipeReader {
             throw c.error("", "the recipe must be a JSON object");
         }
         String crs = c.text(root, "crs", true);
-        GeoTiffGrids.decode(crs); // fails with a clear message for an unknown code
+        try {
+            GeoTiffGrids.decode(crs); // fails with a clear message for an unknown code
+        } catch (IllegalArgumentException e) {
+            throw c.error("crs", e.getMessage());
+        }
         JsonNode s = c.object(root, "survey", true);
         Path surveyFile = c.file(dir, s, "survey.file", true);
         JsonNode cols = c.object(s, "columns", true);
@@ -84,7 +91,7 @@ public final class RecipeReader {
             }
             tl.forEach(t -> ties.add(t.asText()));
         }
-        Recipe.Survey survey = new Recipe.Survey(surveyFile, columns, sensors, ties);
+        Recipe.Survey survey = new Recipe.Survey(surveyFile, columns, sensors, ties, lag(c, s), microLevelling(c, s));
         Path base = optionalFile(c, dir, root, "base_station");
         Recipe.Field field = null;
         JsonNode f = c.object(root, "field", false);
@@ -118,6 +125,39 @@ public final class RecipeReader {
                 optionalFile(c, dir, root, "infrastructure"), targets);
     }
 
+    /** The optional {@code survey.lag} block; {@link LagOptions#OFF} without it. */
+    private static LagOptions lag(Ctx c, JsonNode survey) {
+        JsonNode b = c.object(survey, "lag", false, "survey.lag");
+        if (b == null) {
+            return LagOptions.OFF;
+        }
+        boolean estimate = c.bool(b, "estimate", false, "survey.lag");
+        boolean apply = c.bool(b, "apply_estimate", false, "survey.lag");
+        double seconds = c.number(b, "seconds", Double.NaN, "survey.lag");
+        double max = c.number(b, "max_s", LagOptions.DEFAULT_MAX_LAG_S, "survey.lag");
+        try {
+            return new LagOptions(estimate || apply, apply, seconds, max);
+        } catch (IllegalArgumentException e) {
+            throw c.error("survey.lag", e.getMessage());
+        }
+    }
+
+    /** The optional {@code survey.micro_levelling} block: present (and not {@code "enabled": false}) turns it on. */
+    private static Optional<MicroLevelling.Settings> microLevelling(Ctx c, JsonNode survey) {
+        String at = "survey.micro_levelling";
+        JsonNode b = c.object(survey, "micro_levelling", false, at);
+        if (b == null || !c.bool(b, "enabled", true, at)) {
+            return Optional.empty();
+        }
+        try {
+            return Optional.of(new MicroLevelling.Settings(c.number(b, "across_wavelength_m", Double.NaN, at),
+                    c.number(b, "along_wavelength_m", Double.NaN, at),
+                    c.number(b, "limit_nt", MicroLevelling.DEFAULT_LIMIT_NT, at)));
+        } catch (IllegalArgumentException e) {
+            throw c.error(at, e.getMessage());
+        }
+    }
+
     private static Path optionalFile(Ctx c, Path dir, JsonNode root, String block) {
         JsonNode b = c.object(root, block, false);
         return b == null ? null : c.file(dir, b, block + ".file", true);
@@ -130,17 +170,33 @@ public final class RecipeReader {
         }
 
         JsonNode object(JsonNode parent, String key, boolean required) {
+            return object(parent, key, required, key);
+        }
+
+        /** The object {@code key} of {@code parent}; {@code path} names it in errors. */
+        JsonNode object(JsonNode parent, String key, boolean required, String path) {
             JsonNode n = parent.get(key);
             if (n == null || n.isNull()) {
                 if (required) {
-                    throw error(key, "required block is missing");
+                    throw error(path, "required block is missing");
                 }
                 return null;
             }
             if (!n.isObject()) {
-                throw error(key, "must be a JSON object");
+                throw error(path, "must be a JSON object");
             }
             return n;
+        }
+
+        boolean bool(JsonNode parent, String key, boolean fallback, String at) {
+            JsonNode n = parent.get(key);
+            if (n == null || n.isNull()) {
+                return fallback;
+            }
+            if (!n.isBoolean()) {
+                throw error(at + "." + key, "must be true or false, got " + n);
+            }
+            return n.asBoolean();
         }
 
         String text(JsonNode parent, String key, boolean required) {

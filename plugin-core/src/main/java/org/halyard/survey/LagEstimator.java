@@ -26,6 +26,8 @@ public final class LagEstimator {
 
     /** Lines whose mean headings differ by more than this are opposite, degrees. */
     static final double OPPOSITE_DEG = 150;
+    /** Shorter lines are not used. */
+    static final int MIN_SAMPLES = 10;
 
     /**
      * @param lagS   estimated lag, s: positive when readings are late (belong to an earlier position)
@@ -46,26 +48,16 @@ public final class LagEstimator {
      * @throws IllegalArgumentException when no pair of opposite lines exists
      */
     public static Result estimate(SurveyLines lines, double[] value, boolean[] isTie, double maxLagS) {
-        double[] x = lines.x(), y = lines.y(), t = lines.time();
-        List<int[]> pairs = new ArrayList<>();
-        int prev = -1;
+        List<int[]> pairs = oppositePairs(lines, isTie);
+        double[] t = lines.time();
         double dtSum = 0;
         int dtN = 0;
         for (int l = 0; l < lines.lineCount(); l++) {
-            if (isTie[l] || lines.end(l) - lines.start(l) < 10) {
-                continue;
-            }
             int s = lines.start(l), e = lines.end(l);
-            dtSum += (t[e - 1] - t[s]) / (e - s - 1);
-            dtN++;
-            if (prev >= 0 && angle(heading(x, y, lines, prev), heading(x, y, lines, l)) > OPPOSITE_DEG) {
-                pairs.add(new int[] {prev, l});
+            if (!isTie[l] && e - s >= MIN_SAMPLES) {
+                dtSum += (t[e - 1] - t[s]) / (e - s - 1);
+                dtN++;
             }
-            prev = l;
-        }
-        if (pairs.isEmpty()) {
-            throw new IllegalArgumentException(lines.source() + ": no neighbouring traverse lines run in opposite "
-                    + "directions; the lag cannot be estimated");
         }
         double step = dtSum / dtN;
         int k = (int) Math.ceil(maxLagS / step);
@@ -90,6 +82,47 @@ public final class LagEstimator {
             }
         }
         return new Result(lag, pairs.size(), m[best] / pairs.size());
+    }
+
+    /**
+     * The mean misfit of the opposite-direction pairs for one trial lag: the figure {@link #estimate}
+     * minimises, for reporting the mismatch before and after a lag is applied.
+     *
+     * @param lines the lines (reference positions m, times s)
+     * @param value the value per row, nT
+     * @param isTie per line, whether it is a tie line (excluded)
+     * @param lagS  the trial lag, s (positive: readings late)
+     * @return the mean over pairs of the variance of the difference of the two profiles, nT^2
+     * @throws IllegalArgumentException when no pair of opposite lines exists
+     */
+    public static double meanMisfit(SurveyLines lines, double[] value, boolean[] isTie, double lagS) {
+        List<int[]> pairs = oppositePairs(lines, isTie);
+        double m = 0;
+        for (int[] p : pairs) {
+            m += misfit(lines, value, p[0], p[1], lagS);
+        }
+        return m / pairs.size();
+    }
+
+    /** Consecutive traverse lines (file order) of at least {@value #MIN_SAMPLES} samples run in opposite directions. */
+    private static List<int[]> oppositePairs(SurveyLines lines, boolean[] isTie) {
+        double[] x = lines.x(), y = lines.y();
+        List<int[]> pairs = new ArrayList<>();
+        int prev = -1;
+        for (int l = 0; l < lines.lineCount(); l++) {
+            if (isTie[l] || lines.end(l) - lines.start(l) < MIN_SAMPLES) {
+                continue;
+            }
+            if (prev >= 0 && angle(heading(x, y, lines, prev), heading(x, y, lines, l)) > OPPOSITE_DEG) {
+                pairs.add(new int[] {prev, l});
+            }
+            prev = l;
+        }
+        if (pairs.isEmpty()) {
+            throw new IllegalArgumentException(lines.source() + ": no neighbouring traverse lines run in opposite "
+                    + "directions; the lag cannot be estimated");
+        }
+        return pairs;
     }
 
     private static double heading(double[] x, double[] y, SurveyLines lines, int l) {

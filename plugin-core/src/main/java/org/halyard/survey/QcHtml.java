@@ -38,6 +38,28 @@ final class QcHtml {
             stats(h, "after levelling", qc.after());
             h.append("</table>\n<p><img src=\"crossovers.png\" alt=\"crossover misfits\"></p>\n");
         }
+        s.lag().ifPresent(l -> {
+            h.append("<h2>Lag</h2>\n<table>\n");
+            row(h, "estimated lag (s)", QcReportWriter.num(l.estimatedS(), 3));
+            row(h, "pairs of opposite-direction lines", Integer.toString(l.pairs()));
+            row(h, "lag applied to the positions (s)", QcReportWriter.num(l.appliedS(), 3));
+            row(h, "opposite-line misfit before the shift (nT\u00b2)", QcReportWriter.num(l.misfitBefore(), 4));
+            row(h, "opposite-line misfit after the shift (nT\u00b2)", QcReportWriter.num(l.misfitAfter(), 4));
+            h.append("</table>\n");
+        });
+        s.microLevelling().ifPresent(m -> {
+            h.append("<h2>Micro-levelling</h2>\n<table>\n");
+            row(h, "traverse lines micro-levelled", Integer.toString(m.linesCorrected()));
+            row(h, "traverse lines left alone", Integer.toString(m.linesSkipped()));
+            row(h, "line spacing (m)", QcReportWriter.num(m.lineSpacingM(), 2));
+            row(h, "across-line wavelength (m)", QcReportWriter.num(m.acrossWavelengthM(), 1));
+            row(h, "along-line wavelength (m)", QcReportWriter.num(m.alongWavelengthM(), 1));
+            row(h, "limit (nT)", QcReportWriter.num(m.limitNt(), 2));
+            row(h, "RMS of the applied correction (nT)", QcReportWriter.num(m.rmsNt(), 3));
+            row(h, "largest correction (nT)", QcReportWriter.num(m.maxAbsNt(), 3));
+            row(h, "stations at the limit (%)", QcReportWriter.num(100 * m.clippedFraction(), 1));
+            h.append("</table>\n");
+        });
         h.append("<h2>Tracks</h2>\n<p><img src=\"tracks.png\" alt=\"track plot\"></p>\n");
         h.append("<h2>Noise</h2>\n<p><img src=\"noise.png\" alt=\"noise per line\"></p>\n");
         if (altitude) {

@@ -70,6 +70,16 @@ public final class SurveyLines {
         this.values = values;
     }
 
+    /**
+     * These lines with other reference positions (e.g. after a lag shift); every other array is shared.
+     *
+     * @param newX reference-point easting per row, m
+     * @param newY reference-point northing per row, m
+     */
+    public SurveyLines withPositions(double[] newX, double[] newY) {
+        return new SurveyLines(source, lineIds, lineStart, hasTime, time, newX, newY, altitude, depth, sensors, values);
+    }
+
     /** Where the data came from, for messages. */
     public String source() {
         return source;

@@ -21,11 +21,14 @@ import java.util.Optional;
  * @param gradients            whether to compute sensor-pair gradients; default true
  * @param field                the Earth's field from the recipe, if given
  * @param trackToleranceM      simplification tolerance of the track geometries, m; default 0.05
+ * @param lag                  lag estimate and shift; default {@link LagOptions#OFF}
+ * @param microLevelling       micro-levelling after tie-line levelling, if wanted; default none
  */
 public record SurveyOptions(double headingSmoothingM, double spikeThresholdSigmas, double diurnalDatumNt,
                             double baseGapLimitS, LevellingTrend trend, boolean adjustTies, double altitudeLimitM,
                             double lineSpacingLimitM, double gapFactor, boolean gradients,
-                            Optional<FieldEstimate> field, double trackToleranceM) {
+                            Optional<FieldEstimate> field, double trackToleranceM, LagOptions lag,
+                            Optional<MicroLevelling.Settings> microLevelling) {
 
     public SurveyOptions {
         if (!(headingSmoothingM > 0)) {
@@ -49,50 +52,71 @@ public record SurveyOptions(double headingSmoothingM, double spikeThresholdSigma
         if (!(trackToleranceM >= 0)) {
             throw new IllegalArgumentException("track tolerance must be >= 0 m, got " + trackToleranceM);
         }
-        if (trend == null || field == null) {
-            throw new IllegalArgumentException("levelling trend and field must be given (use Optional.empty())");
+        if (trend == null || field == null || lag == null || microLevelling == null) {
+            throw new IllegalArgumentException("levelling trend, field, lag and micro-levelling must be given "
+                    + "(use Optional.empty(), LagOptions.OFF)");
         }
     }
 
     /** The defaults listed above. */
     public static SurveyOptions defaults() {
         return new SurveyOptions(10, 10, Double.NaN, Double.NaN, LevellingTrend.CONSTANT, false, Double.NaN,
-                Double.NaN, 2, true, Optional.empty(), 0.05);
+                Double.NaN, 2, true, Optional.empty(), 0.05, LagOptions.OFF,
+                Optional.empty());
     }
 
     /** These options with another levelling trend and tie treatment. */
     public SurveyOptions withLevelling(LevellingTrend t, boolean adjust) {
         return new SurveyOptions(headingSmoothingM, spikeThresholdSigmas, diurnalDatumNt, baseGapLimitS, t, adjust,
-                altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, field, trackToleranceM);
+                altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, field, trackToleranceM, lag,
+                microLevelling);
     }
 
     /** These options with QC limits: altitude and line spacing, m (NaN for none). */
     public SurveyOptions withLimits(double altitudeM, double spacingM) {
         return new SurveyOptions(headingSmoothingM, spikeThresholdSigmas, diurnalDatumNt, baseGapLimitS, trend,
-                adjustTies, altitudeM, spacingM, gapFactor, gradients, field, trackToleranceM);
+                adjustTies, altitudeM, spacingM, gapFactor, gradients, field, trackToleranceM, lag,
+                microLevelling);
     }
 
     /** These options with a diurnal datum (nT, NaN for the median) and base gap limit (s, NaN for default). */
     public SurveyOptions withDiurnal(double datumNt, double gapLimitS) {
         return new SurveyOptions(headingSmoothingM, spikeThresholdSigmas, datumNt, gapLimitS, trend, adjustTies,
-                altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, field, trackToleranceM);
+                altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, field, trackToleranceM, lag,
+                microLevelling);
     }
 
     /** These options with a spike threshold (MAD sigmas; 0 for no repair) and heading smoothing (m). */
     public SurveyOptions withCleaning(double spikeSigmas, double smoothingM) {
         return new SurveyOptions(smoothingM, spikeSigmas, diurnalDatumNt, baseGapLimitS, trend, adjustTies,
-                altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, field, trackToleranceM);
+                altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, field, trackToleranceM, lag,
+                microLevelling);
     }
 
     /** These options with the recipe's field, or none. */
     public SurveyOptions withField(Optional<FieldEstimate> f) {
         return new SurveyOptions(headingSmoothingM, spikeThresholdSigmas, diurnalDatumNt, baseGapLimitS, trend,
-                adjustTies, altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, f, trackToleranceM);
+                adjustTies, altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, f, trackToleranceM, lag,
+                microLevelling);
     }
 
     /** These options with gradients computed or not. */
     public SurveyOptions withGradients(boolean on) {
         return new SurveyOptions(headingSmoothingM, spikeThresholdSigmas, diurnalDatumNt, baseGapLimitS, trend,
-                adjustTies, altitudeLimitM, lineSpacingLimitM, gapFactor, on, field, trackToleranceM);
+                adjustTies, altitudeLimitM, lineSpacingLimitM, gapFactor, on, field, trackToleranceM, lag,
+                microLevelling);
+    }
+
+    /** These options with lag settings. */
+    public SurveyOptions withLag(LagOptions l) {
+        return new SurveyOptions(headingSmoothingM, spikeThresholdSigmas, diurnalDatumNt, baseGapLimitS, trend,
+                adjustTies, altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, field, trackToleranceM, l,
+                microLevelling);
+    }
+
+    /** These options with micro-levelling on (with these settings) or off (empty). */
+    public SurveyOptions withMicroLevelling(Optional<MicroLevelling.Settings> m) {
+        return new SurveyOptions(headingSmoothingM, spikeThresholdSigmas, diurnalDatumNt, baseGapLimitS, trend,
+                adjustTies, altitudeLimitM, lineSpacingLimitM, gapFactor, gradients, field, trackToleranceM, lag, m);
     }
 }

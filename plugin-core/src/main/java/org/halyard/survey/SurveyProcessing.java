@@ -13,12 +13,16 @@ import org.locationtech.jts.geom.Geometry;
  * The survey stage of a run: raw lines to positioned, corrected, cleaned, levelled line data, gradients,
  * tracks and QC, in that order:
  * <ol>
- *   <li>positioning: distance and smoothed heading ({@link TrackPositioning}), each sensor offset;</li>
  *   <li>diurnal correction from the base station, if any ({@link DiurnalCorrection}); without a recipe
  *       field, the field from the base station ({@link FieldEstimate#fromBaseStation});</li>
  *   <li>spike repair and noise ({@link SpikeDetector}) per sensor;</li>
+ *   <li>when asked for, the lag estimate from opposite-direction lines ({@link LagEstimator}) and a shift of
+ *       the reference positions by a given or the estimated lag ({@link LagShift});</li>
+ *   <li>positioning: distance and smoothed heading ({@link TrackPositioning}), each sensor offset;</li>
  *   <li>levelling on traverse/tie crossovers of the sensor mean ({@link CrossoverFinder},
  *       {@link LineLevelling}), the same correction applied to every sensor of a line;</li>
+ *   <li>when asked for, micro-levelling of the sensor mean ({@link MicroLevelling}), again the same
+ *       correction for every sensor;</li>
  *   <li>gradients of adjacent sensor pairs sorted port to starboard ({@link PairGradient});</li>
  *   <li>QC: per line figures, spacing ({@link LineSpacing}), coverage outline, tracks.</li>
  * </ol>
@@ -47,7 +51,7 @@ public final class SurveyProcessing {
      */
     public static ProcessedSurvey run(SurveyInput input, SurveyOptions options, BaseStation base, Progress progress) {
         Progress p = Progress.orNone(progress);
-        SurveyLines lines = input.lines();
+        SurveyLines lines = input.lines(); // replaced by the shifted lines when a lag is applied
         boolean[] isTie = input.tieMask();
         List<String> messages = new ArrayList<>();
         java.util.Map<String, Double> stages = new java.util.LinkedHashMap<>();
@@ -57,14 +61,7 @@ public final class SurveyProcessing {
         messages.add(String.format(Locale.ROOT, "survey %s: %d lines (%d tie), %d samples, %d sensors",
                 lines.source(), lines.lineCount(), input.tieLines().size(), n, ns));
 
-        double[] dist = new double[n];
-        float[] heading = new float[n];
-        TrackPositioning.compute(lines, options.headingSmoothingM(), dist, heading);
-        clock = lap(stages, "positioning", clock);
-        p.report(10);
-        p.checkCanceled();
-
-        // 2. diurnal
+        // diurnal (times only: positions may still move by a lag shift)
         double[] diurnal = null;
         double datum = Double.NaN;
         int baseGaps = 0;
@@ -102,16 +99,12 @@ public final class SurveyProcessing {
         p.report(25);
         p.checkCanceled();
 
-        // positions, corrected copies, spikes
-        List<SensorTrack> tracks = new ArrayList<>(ns);
-        List<SpikeAt> spikeList = new ArrayList<>();
-        int[] spikesPerLine = new int[lines.lineCount()];
+        // corrected copies and spikes per sensor
+        double[][] values = new double[ns][];
+        byte[][] sensorFlags = new byte[ns][];
+        int[][] spikeRows = new int[ns][];
         List<double[]> noise = new ArrayList<>();
-        int spikeCount = 0;
         for (int s = 0; s < ns; s++) {
-            SensorSpec spec = lines.sensors().get(s);
-            double[] sx = new double[n], sy = new double[n];
-            TrackPositioning.offset(lines.x(), lines.y(), heading, spec.acrossM(), spec.alongM(), sx, sy);
             double[] v = lines.values(s).clone();
             byte[] flags = new byte[n];
             for (int i = 0; i < n; i++) {
@@ -127,23 +120,51 @@ public final class SurveyProcessing {
             }
             SpikeDetector.Result sp = SpikeDetector.clean(lines, v, flags, options.spikeThresholdSigmas());
             noise.add(sp.noiseNt());
-            spikeCount += sp.spikeRows().length;
-            for (int r : sp.spikeRows()) {
+            values[s] = v;
+            sensorFlags[s] = flags;
+            spikeRows[s] = sp.spikeRows();
+            p.report(25 + 15.0 * (s + 1) / ns);
+            p.checkCanceled();
+        }
+        clock = lap(stages, "spikes", clock);
+
+        // lag: estimated on the cleaned sensor mean, applied by moving the reference positions along track
+        Optional<LagOutcome> lag = Optional.empty();
+        if (options.lag().any()) {
+            LagResult lr = lag(lines, sensorMean(values, n), isTie, options.lag(), messages);
+            lines = lr.lines();
+            lag = Optional.of(lr.outcome());
+            clock = lap(stages, "lag", clock);
+        }
+
+        double[] dist = new double[n];
+        float[] heading = new float[n];
+        TrackPositioning.compute(lines, options.headingSmoothingM(), dist, heading);
+        List<SensorTrack> tracks = new ArrayList<>(ns);
+        List<SpikeAt> spikeList = new ArrayList<>();
+        int[] spikesPerLine = new int[lines.lineCount()];
+        int spikeCount = 0;
+        for (int s = 0; s < ns; s++) {
+            SensorSpec spec = lines.sensors().get(s);
+            double[] sx = new double[n], sy = new double[n];
+            TrackPositioning.offset(lines.x(), lines.y(), heading, spec.acrossM(), spec.alongM(), sx, sy);
+            spikeCount += spikeRows[s].length;
+            for (int r : spikeRows[s]) {
                 int l = lines.lineOfRow(r);
                 spikesPerLine[l]++;
                 if (spikeList.size() < MAX_LISTED_SPIKES) {
                     spikeList.add(new SpikeAt(lines.lineId(l), spec.column(), r, sx[r], sy[r], lines.time()[r]));
                 }
             }
-            tracks.add(new SensorTrack(spec, sx, sy, lines.depth(), lines.altitude(), v, flags));
-            p.report(25 + 20.0 * (s + 1) / ns);
-            p.checkCanceled();
+            tracks.add(new SensorTrack(spec, sx, sy, lines.depth(), lines.altitude(), values[s], sensorFlags[s]));
         }
+        p.report(45);
+        p.checkCanceled();
         messages.add(spikeCount == 0 ? "no spikes found" : String.format(Locale.ROOT,
                 "%d spikes found and repaired (threshold %.1f MAD sigmas of the fourth difference)%s", spikeCount,
                 options.spikeThresholdSigmas(), spikeList.isEmpty() ? "" : "; first at line " + spikeList.get(0).line()
                         + ", sensor " + spikeList.get(0).sensor() + ", row " + spikeList.get(0).row()));
-        clock = lap(stages, "sensor positions and spikes", clock);
+        clock = lap(stages, "positioning", clock);
 
         // levelling
         List<Crossover> crossovers = List.of();
@@ -202,6 +223,21 @@ public final class SurveyProcessing {
             }
         }
         clock = lap(stages, "levelling", clock);
+        Optional<MicroLevelling.Result> micro = Optional.empty();
+        if (options.microLevelling().isPresent()) {
+            MicroLevelling.Result m = MicroLevelling.compute(lines, sensorMean(tracks, n), isTie,
+                    options.microLevelling().get());
+            double[] c = m.correctionNt();
+            for (SensorTrack st : tracks) {
+                double[] v = st.value();
+                for (int i = 0; i < n; i++) {
+                    v[i] += c[i];
+                }
+            }
+            messages.add(m.note());
+            micro = Optional.of(m);
+            clock = lap(stages, "micro-levelling", clock);
+        }
         p.report(70);
         p.checkCanceled();
 
@@ -241,7 +277,7 @@ public final class SurveyProcessing {
         lap(stages, "qc and tracks", clock);
         p.report(100);
         return new ProcessedSurvey(lines, isTie, dist, heading, tracks, grads, crossovers, solution, field, qc,
-                trackFeatures, messages, stages);
+                trackFeatures, messages, stages, lag, micro);
     }
 
     private static final java.lang.management.ThreadMXBean THREADS = java.lang.management.ManagementFactory.getThreadMXBean();
@@ -260,17 +296,72 @@ public final class SurveyProcessing {
 
     /** Mean of the sensors' values per row, NaN where any is missing. */
     static double[] sensorMean(List<SensorTrack> tracks, int n) {
+        double[][] v = new double[tracks.size()][];
+        for (int s = 0; s < v.length; s++) {
+            v[s] = tracks.get(s).value();
+        }
+        return sensorMean(v, n);
+    }
+
+    /** Mean of the sensors' values per row ({@code values[sensor][row]}), NaN where any is missing. */
+    static double[] sensorMean(double[][] values, int n) {
         double[] m = new double[n];
-        for (SensorTrack st : tracks) {
-            double[] v = st.value();
+        for (double[] v : values) {
             for (int i = 0; i < n; i++) {
                 m[i] += v[i];
             }
         }
         for (int i = 0; i < n; i++) {
-            m[i] /= tracks.size();
+            m[i] /= values.length;
         }
         return m;
+    }
+
+    private record LagResult(SurveyLines lines, LagOutcome outcome) {
+    }
+
+    /** Estimates and/or applies the lag as asked; says what it did in {@code messages}. */
+    private static LagResult lag(SurveyLines lines, double[] mean, boolean[] isTie, LagOptions o, List<String> messages) {
+        if (!lines.hasTime()) {
+            throw new IllegalArgumentException(lines.source() + ": the lag estimate and shift need a time column");
+        }
+        double estimated = Double.NaN;
+        int pairs = 0;
+        if (o.estimate()) {
+            try {
+                LagEstimator.Result r = LagEstimator.estimate(lines, mean, isTie, o.maxLagS());
+                estimated = r.lagS();
+                pairs = r.pairs();
+                messages.add(String.format(Locale.ROOT, "lag estimated from %d pairs of opposite-direction lines: "
+                        + "%.3f s (readings %s; searched +-%.2f s)", pairs, estimated,
+                        estimated >= 0 ? "late" : "early", o.maxLagS()));
+                if (Math.abs(estimated) >= o.maxLagS() * 0.999) {
+                    messages.add("the lag estimate is at the edge of the search range: widen it before trusting it");
+                }
+            } catch (IllegalArgumentException e) {
+                if (o.applyEstimate()) {
+                    throw e;
+                }
+                messages.add("lag not estimated: " + e.getMessage());
+            }
+        }
+        double applied = o.applyEstimate() ? estimated : o.givenLagS();
+        if (Double.isNaN(applied)) {
+            return new LagResult(lines, new LagOutcome(estimated, pairs, Double.NaN, Double.NaN, Double.NaN));
+        }
+        SurveyLines shifted = LagShift.apply(lines, applied);
+        double before = Double.NaN, after = Double.NaN;
+        try {
+            before = LagEstimator.meanMisfit(lines, mean, isTie, 0);
+            after = LagEstimator.meanMisfit(shifted, mean, isTie, 0);
+        } catch (IllegalArgumentException e) {
+            // no opposite-direction pairs: nothing to compare, the shift still applies
+        }
+        messages.add(String.format(Locale.ROOT, "positions shifted along track by a lag of %.3f s (%s)%s", applied,
+                o.applyEstimate() ? "estimated" : "given", Double.isNaN(before) ? ""
+                        : String.format(Locale.ROOT, "; opposite-line misfit %.4f nT^2 before, %.4f nT^2 after", before,
+                        after)));
+        return new LagResult(shifted, new LagOutcome(estimated, pairs, applied, before, after));
     }
 
     private static double[] span(double[] t) {

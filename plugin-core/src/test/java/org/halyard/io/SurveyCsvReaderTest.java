@@ -82,7 +82,8 @@ class SurveyCsvReaderTest {
                 + "L1,2026-05-14T09:30:00.200Z,500000.2,6100000.0,2.5,20.1,4900o.1,49000.5\n"), COLS, "EPSG:32631", null))
                 .hasMessageContaining("line 3").hasMessageContaining("'mag_port'").hasMessageContaining("not a number");
         assertThatThrownBy(() -> SurveyCsvReader.read(write(HEADER + row1 + "L1,2026-05-14T09:30:00.200Z,500000.2\n"),
-                COLS, "EPSG:32631", null)).hasMessageContaining("line 3").hasMessageContaining("truncated");
+                COLS, "EPSG:32631", null)).hasMessageContaining("line 3").hasMessageContaining("column 'y'")
+                .hasMessageContaining("truncated");
         assertThatThrownBy(() -> SurveyCsvReader.read(write(HEADER + row1
                 + "L1,2026-05-14T09:30:00.000Z,500000.2,6100000.0,2.5,20.1,49000.1,49000.5\n"), COLS, "EPSG:32631", null))
                 .hasMessageContaining("line 3").hasMessageContaining("'time'").hasMessageContaining("backwards");

@@ -52,9 +52,36 @@ class RecipeReaderTest {
     }
 
     @Test
+    void lagAndMicroLevellingAreOffUnlessAskedFor() throws IOException {
+        Recipe plain = RecipeReader.read(recipe(MINIMAL));
+        assertThat(plain.survey().lag()).isEqualTo(org.halyard.survey.LagOptions.OFF);
+        assertThat(plain.survey().microLevelling()).isEmpty();
+        Recipe on = RecipeReader.read(recipe(MINIMAL.replace("\"sensors\"", "\"lag\": {\"apply_estimate\": true, \"max_s\": 1.5}, "
+                + "\"micro_levelling\": {\"along_wavelength_m\": 300, \"limit_nt\": 2}, \"sensors\"")));
+        assertThat(on.survey().lag()).isEqualTo(new org.halyard.survey.LagOptions(true, true, Double.NaN, 1.5));
+        assertThat(on.survey().microLevelling()).contains(new org.halyard.survey.MicroLevelling.Settings(Double.NaN, 300, 2));
+        Recipe given = RecipeReader.read(recipe(MINIMAL.replace("\"sensors\"", "\"lag\": {\"seconds\": 0.25}, "
+                + "\"micro_levelling\": {\"enabled\": false}, \"sensors\"")));
+        assertThat(given.survey().lag()).isEqualTo(new org.halyard.survey.LagOptions(false, false, 0.25, 2));
+        assertThat(given.survey().microLevelling()).isEmpty();
+        assertThatThrownBy(() -> RecipeReader.read(recipe(MINIMAL.replace("\"sensors\"",
+                "\"lag\": {\"apply_estimate\": true, \"seconds\": 0.2}, \"sensors\""))))
+                .hasMessageContaining("survey.lag").hasMessageContaining("not both");
+        assertThatThrownBy(() -> RecipeReader.read(recipe(MINIMAL.replace("\"sensors\"",
+                "\"micro_levelling\": {\"limit_nt\": -1}, \"sensors\""))))
+                .hasMessageContaining("survey.micro_levelling").hasMessageContaining("limit");
+        assertThatThrownBy(() -> RecipeReader.read(recipe(MINIMAL.replace("\"sensors\"",
+                "\"lag\": {\"estimate\": \"yes\"}, \"sensors\""))))
+                .hasMessageContaining("survey.lag.estimate").hasMessageContaining("true or false");
+        assertThatThrownBy(() -> RecipeReader.read(recipe(MINIMAL.replace("\"sensors\"",
+                "\"micro_levelling\": true, \"sensors\""))))
+                .hasMessageContaining("survey.micro_levelling").hasMessageContaining("JSON object");
+    }
+
+    @Test
     void badRecipesGiveOneLineErrorsNamingTheEntry() throws IOException {
         assertThatThrownBy(() -> RecipeReader.read(recipe(MINIMAL.replace("EPSG:32631", "EPSG:99999999"))))
-                .hasMessageContaining("unknown CRS code");
+                .hasMessageContaining("recipe.json: crs: ").hasMessageContaining("unknown CRS code");
         assertThatThrownBy(() -> RecipeReader.read(recipe(MINIMAL.replace("\"lines.csv\"", "\"nope.csv\""))))
                 .hasMessageContaining("survey.file").hasMessageContaining("no such file");
         assertThatThrownBy(() -> RecipeReader.read(recipe(MINIMAL.replace("\"line\": \"line\", ", ""))))

@@ -12,7 +12,9 @@ import org.halyard.io.Iaga2002Reader;
 import org.halyard.io.LineDataCsvWriter;
 import org.halyard.io.SurveyCsvReader;
 import org.halyard.survey.BaseStation;
+import org.halyard.survey.LagOptions;
 import org.halyard.survey.LevellingTrend;
+import org.halyard.survey.MicroLevelling;
 import org.halyard.survey.ProcessedSurvey;
 import org.halyard.survey.QcReportWriter;
 import org.halyard.survey.SensorSpec;
@@ -30,8 +32,8 @@ import picocli.CommandLine.Parameters;
  * levels on tie lines and writes the processed CSV and the QC report.
  */
 @Command(name = "lines", mixinStandardHelpOptions = true, description = {
-        "Process survey lines: import, sensor positions, diurnal correction, spike repair, tie-line levelling,",
-        "gradients; writes OUT/lines_processed.csv and OUT/report/ (qc.html, qc_lines.csv, plots)."})
+        "Process survey lines: import, sensor positions, diurnal correction, spike repair, optional lag estimate",
+        "and shift, tie-line levelling, optional micro-levelling, gradients; writes OUT/lines_processed.csv and OUT/report/ (qc.html, qc_lines.csv, plots)."})
 final class LinesCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "LINES.csv", description = "Survey CSV with a header row.")
@@ -102,6 +104,38 @@ final class LinesCommand implements Callable<Integer> {
     @Option(names = "--spacing-limit", paramLabel = "M", description = "Line spacing limit for QC, m.")
     Double spacingLimit;
 
+    @Option(names = "--estimate-lag", description = "Estimate the lag between positions and readings from neighbouring "
+            + "lines run in opposite directions, and report it.")
+    boolean estimateLag;
+
+    @Option(names = "--apply-estimated-lag", description = "Shift the positions along track by the estimated lag "
+            + "(implies --estimate-lag).")
+    boolean applyEstimatedLag;
+
+    @Option(names = "--lag", paramLabel = "S", description = "Shift the positions along track by this known lag, s "
+            + "(positive when the readings are late).")
+    Double lag;
+
+    @Option(names = "--max-lag", defaultValue = "2", paramLabel = "S",
+            description = "Largest lag the estimate tries either way, s (default: ${DEFAULT-VALUE}).")
+    double maxLag;
+
+    @Option(names = "--micro-level", description = "Micro-level the traverse lines after tie-line levelling "
+            + "(directional filter after Minty 1991).")
+    boolean microLevel;
+
+    @Option(names = "--micro-across", paramLabel = "M", description = "Micro-levelling across-line wavelength, m "
+            + "(default: " + MicroLevelling.DEFAULT_ACROSS_SPACINGS + " line spacings).")
+    Double microAcross;
+
+    @Option(names = "--micro-along", paramLabel = "M", description = "Micro-levelling along-line wavelength, m "
+            + "(default: " + MicroLevelling.DEFAULT_ALONG_SPACINGS + " line spacings).")
+    Double microAlong;
+
+    @Option(names = "--micro-limit", paramLabel = "NT", description = "Largest micro-levelling correction, nT "
+            + "(default: " + MicroLevelling.DEFAULT_LIMIT_NT + ").")
+    Double microLimit;
+
     @Option(names = "--timings", description = "Print the time of each stage to stderr.")
     boolean timings;
 
@@ -123,7 +157,10 @@ final class LinesCommand implements Callable<Integer> {
                 .withLevelling(parseTrend(trend), adjustTies)
                 .withLimits(altitudeLimit != null ? altitudeLimit : Double.NaN, spacingLimit != null ? spacingLimit : Double.NaN)
                 .withDiurnal(datum != null ? datum : Double.NaN, baseGap != null ? baseGap : Double.NaN)
-                .withCleaning(spikeSigmas, SurveyOptions.defaults().headingSmoothingM());
+                .withCleaning(spikeSigmas, SurveyOptions.defaults().headingSmoothingM())
+                .withLag(new LagOptions(estimateLag || applyEstimatedLag, applyEstimatedLag,
+                        lag != null ? lag : Double.NaN, maxLag))
+                .withMicroLevelling(microLevellingSettings());
         ProcessedSurvey ps = SurveyProcessing.run(new SurveyInput(data, tieSet), opt, bs, null);
         long t2 = System.nanoTime();
         // both outputs go to a staging folder first, so a failure leaves neither (no partial output)
@@ -171,6 +208,18 @@ final class LinesCommand implements Callable<Integer> {
         } catch (java.io.IOException ignored) {
             // the original outcome is the one to report
         }
+    }
+
+    /** The micro-levelling settings when {@code --micro-level} is given; the other micro options need it. */
+    Optional<MicroLevelling.Settings> microLevellingSettings() {
+        if (!microLevel) {
+            if (microAcross != null || microAlong != null || microLimit != null) {
+                throw new IllegalArgumentException("--micro-across, --micro-along and --micro-limit need --micro-level");
+            }
+            return Optional.empty();
+        }
+        return Optional.of(new MicroLevelling.Settings(microAcross != null ? microAcross : Double.NaN,
+                microAlong != null ? microAlong : Double.NaN, microLimit != null ? microLimit : MicroLevelling.DEFAULT_LIMIT_NT));
     }
 
     static List<SensorSpec> parseSensors(List<String> specs) {
