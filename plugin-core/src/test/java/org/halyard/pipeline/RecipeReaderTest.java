@@ -37,7 +37,16 @@ class RecipeReaderTest {
         assertThat(r.baseStation()).isNull();
         assertThat(r.field()).isNull();
         assertThat(r.grid().cellM()).isEqualTo(RecipeReader.DEFAULT_CELL_M);
+        assertThat(r.grid().tieLines()).isFalse();
         assertThat(r.bathymetry()).isNull();
+    }
+
+    @Test
+    void tieLinesGoIntoTheGridOnlyWhenAskedFor() throws IOException {
+        String with = MINIMAL.replace("}}\n", "}, \"grid\": {\"cell_m\": 1, \"tie_lines\": true}}\n");
+        assertThat(RecipeReader.read(recipe(with)).grid().tieLines()).isTrue();
+        assertThatThrownBy(() -> RecipeReader.read(recipe(with.replace("true", "\"yes\""))))
+                .hasMessageContaining("grid.tie_lines").hasMessageContaining("true or false");
     }
 
     @Test
