@@ -39,6 +39,22 @@ public final class SurveyCsvReader {
      * @return the line data: x easting, y northing (m), altitude positive up, depth positive down (m), nT
      */
     public static SurveyLines read(Path file, SurveyColumns columns, String crsCode, Progress progress) {
+        return read(file, columns, crsCode, false, m -> { }, progress);
+    }
+
+    /**
+     * Reads {@code file}, optionally skipping the rows that cannot be read (truncated, a cell that is not a
+     * number or not an ISO 8601 time, an empty line id, time or position, a time that repeats or goes
+     * backwards within its line). Skipped rows are reported once through {@code warnings}: their count and
+     * the first {@value SkippedRows#SHOWN} with line number, column and reason. A line that resumes after
+     * other lines is never skipped: it is an error in the file's layout, not in one row.
+     *
+     * @param skipBadRows false: the first bad row is an error, as {@link #read(Path, SurveyColumns, String, Progress)}
+     * @param warnings    receives the one-sentence report of skipped rows, if any
+     * @see #read(Path, SurveyColumns, String, Progress)
+     */
+    public static SurveyLines read(Path file, SurveyColumns columns, String crsCode, boolean skipBadRows,
+                                   java.util.function.Consumer<String> warnings, Progress progress) {
         Progress p = Progress.orNone(progress);
         CrsTransform.requireProjected(crsCode);
         try (CsvTableReader r = CsvTableReader.open(file)) {
@@ -93,56 +109,77 @@ public final class SurveyCsvReader {
             long prevLine = 0;
             int row = 0;
             int indexInLine = 0;
+            SkippedRows skipped = new SkippedRows(file, skipBadRows);
             while (r.next()) {
-                r.requireFields(maxCol + 1);
-                if (current == null || !r.textEquals(cLine, current)) {
-                    String id = r.text(cLine).toString();
-                    if (id.isEmpty()) {
-                        throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
-                                + columns.line() + "': empty line identifier");
+                boolean newLine = false;
+                String id = current;
+                double tt, xx, yy, aa, dd;
+                double[] vv = new double[ns];
+                try {
+                    r.requireFields(maxCol + 1);
+                    newLine = current == null || !r.textEquals(cLine, current);
+                    if (newLine) {
+                        id = r.text(cLine).toString();
+                        if (id.isEmpty()) {
+                            throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
+                                    + columns.line() + "': empty line identifier");
+                        }
+                        Long seen = firstSeen.get(id);
+                        if (seen != null) {
+                            throw new StructureError(file + ": line " + r.lineNumber() + ", column '"
+                                    + columns.line() + "': line '" + id + "' (first at line " + seen
+                                    + ") resumes after other lines; rows of a line must be contiguous");
+                        }
                     }
-                    Long seen = firstSeen.putIfAbsent(id, r.lineNumber());
-                    if (seen != null) {
-                        throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
-                                + columns.line() + "': line '" + id + "' (first at line " + seen
-                                + ") resumes after other lines; rows of a line must be contiguous");
+                    double before = newLine ? Double.NaN : prevT;
+                    if (cTime >= 0) {
+                        tt = r.isoTime(cTime);
+                        if (Double.isNaN(tt)) {
+                            throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
+                                    + timeName + "': empty time");
+                        }
+                        if (tt <= before) {
+                            throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
+                                    + timeName + "': " + (tt == before ? "duplicate time" : "time goes backwards")
+                                    + " within line '" + current + "' (previous row at line " + prevLine + ": "
+                                    + IsoTime.format(before) + ", this row: " + IsoTime.format(tt) + ")");
+                        }
+                    } else {
+                        tt = newLine ? 0 : indexInLine;
                     }
+                    xx = r.number(cx);
+                    yy = r.number(cy);
+                    if (Double.isNaN(xx) || Double.isNaN(yy)) {
+                        throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
+                                + r.header().get(Double.isNaN(xx) ? cx : cy) + "': empty position");
+                    }
+                    aa = cAlt >= 0 ? r.number(cAlt) : Double.NaN;
+                    dd = cDep >= 0 ? r.number(cDep) : Double.NaN;
+                    for (int s = 0; s < ns; s++) {
+                        vv[s] = r.number(cs[s]);
+                    }
+                } catch (StructureError e) {
+                    throw e;
+                } catch (IllegalArgumentException e) {
+                    skipped.add(e);
+                    continue;
+                }
+                if (newLine) {
+                    firstSeen.put(id, r.lineNumber());
                     current = id;
                     ids.add(id);
                     starts.add(row);
-                    prevT = Double.NaN;
                     indexInLine = 0;
-                }
-                double tt;
-                if (cTime >= 0) {
-                    tt = r.isoTime(cTime);
-                    if (Double.isNaN(tt)) {
-                        throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
-                                + timeName + "': empty time");
-                    }
-                    if (tt <= prevT) {
-                        throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
-                                + timeName + "': " + (tt == prevT ? "duplicate time" : "time goes backwards")
-                                + " within line '" + current + "' (previous row at line " + prevLine + ": "
-                                + IsoTime.format(prevT) + ", this row: " + IsoTime.format(tt) + ")");
-                    }
-                } else {
-                    tt = indexInLine;
                 }
                 prevT = tt;
                 prevLine = r.lineNumber();
-                double xx = r.number(cx), yy = r.number(cy);
-                if (Double.isNaN(xx) || Double.isNaN(yy)) {
-                    throw new IllegalArgumentException(file + ": line " + r.lineNumber() + ", column '"
-                            + r.header().get(Double.isNaN(xx) ? cx : cy) + "': empty position");
-                }
                 t.add(tt);
                 x.add(xx);
                 y.add(yy);
-                alt.add(cAlt >= 0 ? r.number(cAlt) : Double.NaN);
-                dep.add(cDep >= 0 ? r.number(cDep) : Double.NaN);
+                alt.add(aa);
+                dep.add(dd);
                 for (int s = 0; s < ns; s++) {
-                    v[s].add(r.number(cs[s]));
+                    v[s].add(vv[s]);
                 }
                 row++;
                 indexInLine++;
@@ -150,6 +187,7 @@ public final class SurveyCsvReader {
                     p.checkCanceled();
                 }
             }
+            skipped.report(warnings);
             if (row == 0) {
                 throw new IllegalArgumentException(file + ": no data rows after the header");
             }
@@ -170,6 +208,47 @@ public final class SurveyCsvReader {
             p.report(100);
             return new SurveyLines(file.getFileName().toString(), ids.toArray(new String[0]), lineStart,
                     cTime >= 0, t.toArray(), xa, ya, alt.toFloatArray(), dep.toFloatArray(), columns.sensors(), va);
+        }
+    }
+
+    /** A fault in the file's layout rather than in one row: never skipped. */
+    private static final class StructureError extends IllegalArgumentException {
+        StructureError(String message) {
+            super(message);
+        }
+    }
+
+    /** The rows skipped so far: their count and the first few reasons. */
+    private static final class SkippedRows {
+        static final int SHOWN = 5;
+        private final Path file;
+        private final boolean allowed;
+        private final List<String> first = new ArrayList<>();
+        private long count;
+
+        SkippedRows(Path file, boolean allowed) {
+            this.file = file;
+            this.allowed = allowed;
+        }
+
+        void add(IllegalArgumentException e) {
+            if (!allowed) {
+                throw e;
+            }
+            count++;
+            if (first.size() < SHOWN) {
+                String m = e.getMessage();
+                String prefix = file + ": ";
+                first.add(m.startsWith(prefix) ? m.substring(prefix.length()) : m);
+            }
+        }
+
+        void report(java.util.function.Consumer<String> warnings) {
+            if (count > 0) {
+                warnings.accept(file.getFileName() + ": skipped " + count + " row" + (count > 1 ? "s" : "")
+                        + " that could not be read (" + (count > SHOWN ? "first " + SHOWN + ": " : "")
+                        + String.join("; ", first) + ")");
+            }
         }
     }
 

@@ -35,7 +35,8 @@ final class LinesStage implements Stage {
     public void run(RunContext ctx, Progress p) {
         Recipe r = ctx.recipe();
         SurveyColumns cols = SurveyColumns.fromRecipe(r.survey().columns(), r.survey().sensors());
-        SurveyLines lines = SurveyCsvReader.read(r.survey().file(), cols, r.crs(), p.slice(0, 40));
+        SurveyLines lines = SurveyCsvReader.read(r.survey().file(), cols, r.crs(), r.survey().skipBadRows(),
+                ctx::note, p.slice(0, 40));
         BaseStation base = null;
         if (r.baseStation() != null) {
             base = Iaga2002Reader.read(r.baseStation());

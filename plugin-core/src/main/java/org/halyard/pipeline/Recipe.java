@@ -37,9 +37,11 @@ public record Recipe(Path file, String name, String crs, Survey survey, Path bas
      * @param tieLines names of the tie lines (the levelling datum)
      * @param lag      lag estimate and shift (the optional {@code lag} block; off without it)
      * @param microLevelling micro-levelling settings when the {@code micro_levelling} block turns it on
+     * @param skipBadRows    rows that cannot be read are skipped with a warning instead of stopping the run
+     *                       ({@code skip_bad_rows}, default false)
      */
     public record Survey(Path file, Map<String, String> columns, List<SensorSpec> sensors, List<String> tieLines,
-                         LagOptions lag, Optional<MicroLevelling.Settings> microLevelling) {
+                         LagOptions lag, Optional<MicroLevelling.Settings> microLevelling, boolean skipBadRows) {
     }
 
     /**

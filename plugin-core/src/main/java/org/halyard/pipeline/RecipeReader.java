@@ -91,7 +91,8 @@ public final class RecipeReader {
             }
             tl.forEach(t -> ties.add(t.asText()));
         }
-        Recipe.Survey survey = new Recipe.Survey(surveyFile, columns, sensors, ties, lag(c, s), microLevelling(c, s));
+        Recipe.Survey survey = new Recipe.Survey(surveyFile, columns, sensors, ties, lag(c, s), microLevelling(c, s),
+                c.flag(s, "skip_bad_rows", false, "survey"));
         Path base = optionalFile(c, dir, root, "base_station");
         Recipe.Field field = null;
         JsonNode f = c.object(root, "field", false);

@@ -105,6 +105,33 @@ class SurveyCsvReaderTest {
     }
 
     @Test
+    void badRowsAreSkippedWhenAskedWithTheirCountAndFirstLines() throws IOException {
+        String ok1 = "L1,2026-05-14T09:30:00.100Z,500000.0,6100000.0,2.5,20.1,49000.1,49000.5\n";
+        String bad = "L1,2026-05-14T09:30:00.200Z,500000.2,6100000.0,2.5,20.1,4900o.1,49000.5\n"; // line 3
+        String ok2 = "L1,2026-05-14T09:30:00.300Z,500000.4,6100000.0,2.5,20.1,49000.3,49000.7\n";
+        String dup = ok2;                                                                           // line 5
+        String cut = "L2,2026-05-14T09:31:00.000Z,500000.2\n";                                     // line 6
+        String l2 = "L2,2026-05-14T09:31:00.100Z,500000.2,6100002.0,2.5,20.1,49001.0,49001.4\n";
+        Path p = write(HEADER + ok1 + bad + ok2 + dup + cut + l2);
+        List<String> warnings = new java.util.ArrayList<>();
+        SurveyLines s = SurveyCsvReader.read(p, COLS, "EPSG:32631", true, warnings::add, null);
+        assertThat(s.size()).isEqualTo(3);
+        assertThat(s.lineCount()).isEqualTo(2);
+        assertThat(s.values(0)).containsExactly(49000.1, 49000.3, 49001.0);
+        assertThat(s.start(1)).isEqualTo(2);
+        assertThat(warnings).hasSize(1);
+        assertThat(warnings.get(0)).startsWith("lines.csv: skipped 3 rows").contains("line 3, column 'mag_port'")
+                .contains("line 5").contains("duplicate time").contains("line 6").contains("truncated");
+        // Without the option the first bad row stops the read, as before.
+        assertThatThrownBy(() -> SurveyCsvReader.read(p, COLS, "EPSG:32631", false, warnings::add, null))
+                .hasMessageContaining("line 3");
+        // A line resuming after another is a layout fault and is never skipped.
+        Path resumed = write(HEADER + ok1 + l2 + ok2);
+        assertThatThrownBy(() -> SurveyCsvReader.read(resumed, COLS, "EPSG:32631", true, warnings::add, null))
+                .hasMessageContaining("contiguous");
+    }
+
+    @Test
     void latitudeLongitudeAreProjectedWithGeoTools() throws IOException {
         SurveyColumns geo = new SurveyColumns("line", Optional.empty(), Optional.empty(), Optional.empty(),
                 Optional.of("lat"), Optional.of("lon"), Optional.empty(), Optional.empty(),

@@ -50,6 +50,10 @@ final class LinesCommand implements Callable<Integer> {
                     + "forward); repeat for each sensor.")
     List<String> sensors;
 
+    @Option(names = "--skip-bad-rows", description = "Skip rows that cannot be read (truncated, not a number,"
+            + " bad or repeated time) with a warning giving their count and first line numbers, instead of stopping.")
+    boolean skipBadRows;
+
     @Option(names = "--line", defaultValue = "line", paramLabel = "COL", description = "Line id column (default: ${DEFAULT-VALUE}).")
     String line;
 
@@ -148,7 +152,8 @@ final class LinesCommand implements Callable<Integer> {
                 lat != null ? Optional.empty() : Optional.of(x), lat != null ? Optional.empty() : Optional.of(y),
                 Optional.ofNullable(lat), Optional.ofNullable(lon), Optional.ofNullable(altitude),
                 Optional.ofNullable(depth), parseSensors(sensors));
-        SurveyLines data = SurveyCsvReader.read(file, cols, crs, null);
+        SurveyLines data = SurveyCsvReader.read(file, cols, crs, skipBadRows, m -> System.err.println("warning: " + m),
+                null);
         long t1 = System.nanoTime();
         long c1 = threads.getCurrentThreadCpuTime();
         BaseStation bs = base != null ? Iaga2002Reader.read(base) : null;
