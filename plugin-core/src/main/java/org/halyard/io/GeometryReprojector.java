@@ -1,11 +1,8 @@
 package org.halyard.io;
 
-import org.geotools.api.referencing.FactoryException;
-import org.geotools.api.referencing.crs.CoordinateReferenceSystem;
 import org.geotools.api.referencing.operation.MathTransform;
 import org.geotools.api.referencing.operation.TransformException;
 import org.geotools.geometry.jts.JTS;
-import org.geotools.referencing.CRS;
 import org.locationtech.jts.geom.Geometry;
 
 /**
@@ -35,14 +32,7 @@ public final class GeometryReprojector {
     public GeometryReprojector(String fromCode, String toCode) {
         this.from = fromCode;
         this.to = toCode;
-        try {
-            CoordinateReferenceSystem src = CRS.decode(fromCode, true);
-            CoordinateReferenceSystem dst = CRS.decode(toCode, true);
-            this.transform = CRS.findMathTransform(src, dst, true);
-        } catch (FactoryException e) {
-            throw new IllegalArgumentException("cannot reproject from " + fromCode + " to " + toCode + ": "
-                    + e.getMessage(), e);
-        }
+        this.transform = CrsTransforms.mathTransform(fromCode, toCode);
     }
 
     /** {@code g} in the target CRS (x first: easting or longitude). */

@@ -5,7 +5,6 @@ import org.geotools.api.referencing.crs.CoordinateReferenceSystem;
 import org.geotools.api.referencing.crs.ProjectedCRS;
 import org.geotools.api.referencing.operation.MathTransform;
 import org.geotools.api.referencing.operation.TransformException;
-import org.geotools.referencing.CRS;
 
 /**
  * Facts about a projected CRS that map sheets print and draw, with GeoTools kept inside: names, datum,
@@ -13,7 +12,7 @@ import org.geotools.referencing.CRS;
  * convergence.
  *
  * <p><b>Algorithm:</b> the projection's own conversion from its base geographic CRS (GeoTools
- * referencing, EPSG database). Grid convergence is found numerically: the point is moved 1e-4 degree
+ * referencing, EPSG database; decoded by {@link GeoTiffGrids#decode}, the package's one decoder). Grid convergence is found numerically: the point is moved 1e-4 degree
  * north and south along its meridian and the direction of that chord in grid coordinates gives the angle between
  * true north and grid north.
  *
@@ -55,15 +54,15 @@ public final class ProjectedCrs {
         if (code == null || code.isBlank()) {
             throw new IllegalArgumentException("no CRS given: pass an EPSG code such as EPSG:32631");
         }
+        CoordinateReferenceSystem c = GeoTiffGrids.decode(code);
+        if (!(c instanceof ProjectedCRS p)) {
+            throw new IllegalArgumentException(code + " is not a projected CRS: sheets need easting and"
+                    + " northing in metres (for example a UTM zone)");
+        }
         try {
-            CoordinateReferenceSystem c = CRS.decode(code.trim(), true);
-            if (!(c instanceof ProjectedCRS p)) {
-                throw new IllegalArgumentException(code + " is not a projected CRS: sheets need easting and"
-                        + " northing in metres (for example a UTM zone)");
-            }
             return new ProjectedCrs(code.trim(), p);
         } catch (FactoryException e) {
-            throw new IllegalArgumentException("unknown CRS " + code + ": " + e.getMessage(), e);
+            throw new IllegalArgumentException("projection of " + code + " is not usable: " + e.getMessage(), e);
         }
     }
 

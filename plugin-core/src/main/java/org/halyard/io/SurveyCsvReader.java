@@ -18,7 +18,7 @@ import org.halyard.survey.SurveyLines;
  * <p>Checks, each failing with the file, line number and column: missing columns (listing those
  * present), non-numeric cells, truncated rows, empty line ids or positions, times going backwards or
  * repeating within a line, a line whose rows are not contiguous. Latitude/longitude columns are projected
- * into the recipe CRS with {@link CrsTransform}.
+ * into the recipe CRS with {@link CrsTransforms}.
  *
  * <p><b>Limitations:</b> rows of a line must be contiguous; positions may not be empty.
  *
@@ -56,7 +56,7 @@ public final class SurveyCsvReader {
     public static SurveyLines read(Path file, SurveyColumns columns, String crsCode, boolean skipBadRows,
                                    java.util.function.Consumer<String> warnings, Progress progress) {
         Progress p = Progress.orNone(progress);
-        CrsTransform.requireProjected(crsCode);
+        CrsTransforms.requireProjected(crsCode);
         try (CsvTableReader r = CsvTableReader.open(file)) {
             List<String> names = new ArrayList<>();
             names.add(columns.line());
@@ -199,7 +199,7 @@ public final class SurveyCsvReader {
             double[] xa = x.toArray(), ya = y.toArray();
             if (geo) {
                 checkGeographic(file, xa, ya);
-                CrsTransform.geographicToProjected(crsCode, xa, ya);
+                CrsTransforms.transformInPlace(CrsTransforms.WGS84, crsCode, xa, ya);
             }
             double[][] va = new double[ns][];
             for (int s = 0; s < ns; s++) {
