@@ -99,6 +99,21 @@ class LinesCommandTest {
             assertThat(err.lines().count()).isEqualTo(1);
             assertThat(out).doesNotExist();
         }
+        // With --skip-bad-rows the same faults become one warning with the count and the first lines.
+        StringBuilder mixed = new StringBuilder(header).append(row1);
+        for (int i = 2; i <= 30; i++) {
+            mixed.append(row1.replace("00.100Z", String.format(java.util.Locale.ROOT, "%02d.100Z", i))
+                    .replace("49000.1", i % 10 == 0 ? "49k" : "49000." + i));
+        }
+        Path csvMixed = dir.resolve("mixed.csv");
+        Files.writeString(csvMixed, mixed.toString());
+        Path kept = dir.resolve("kept");
+        String warn = run(0, "lines", csvMixed.toString(), "--out", kept.toString(), "--crs", "EPSG:32631",
+                "--sensor", "mag:0", "--skip-bad-rows");
+        // rows 10, 20 and 30 hold '49k': file lines 11, 21 and 31
+        assertThat(warn).contains("warning: mixed.csv: skipped 3 rows").contains("line 11, column 'mag'")
+                .contains("line 31");
+        assertThat(kept.resolve("lines_processed.csv")).exists();
         Path csv = dir.resolve("good.csv");
         Files.writeString(csv, header + row1 + row1.replace("00.100Z", "00.200Z"));
         String err = run(1, "lines", csv.toString(), "--out", dir.resolve("never").toString(), "--crs", "EPSG:99999999",
