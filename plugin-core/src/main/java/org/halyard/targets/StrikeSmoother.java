@@ -50,24 +50,27 @@ final class StrikeSmoother {
             return g;
         }
         int nc = geo.columns(), nr = geo.rows();
-        float[] hxx = new float[geo.size()], hyy = new float[geo.size()], hxy = new float[geo.size()];
-        java.util.Arrays.fill(hxx, Float.NaN);
-        java.util.Arrays.fill(hyy, Float.NaN);
-        java.util.Arrays.fill(hxy, Float.NaN);
+        // The Hessian's square, H H: its larger eigenvector is the direction of strongest curvature whatever
+        // its sign, across a ridge on its crest (negative) and its flanks (positive) alike, so averaging it
+        // neither cancels the crest against the flanks nor lets the beads' alternating along-curvature win.
+        float[] txx = blank(geo), tyy = blank(geo), txy = blank(geo);
         for (int r = 1; r < nr - 1; r++) {
             for (int c = 1; c < nc - 1; c++) {
                 int i = geo.index(c, r);
                 double f = g.get(i);
                 // Row index runs south: the mixed derivative takes north minus south, as in RidgeCells.
-                hxx[i] = (float) ((g.get(c + 1, r) - 2 * f + g.get(c - 1, r)) / (h * h));
-                hyy[i] = (float) ((g.get(c, r - 1) - 2 * f + g.get(c, r + 1)) / (h * h));
-                hxy[i] = (float) ((g.get(c + 1, r - 1) - g.get(c - 1, r - 1) - g.get(c + 1, r + 1)
-                        + g.get(c - 1, r + 1)) / (4 * h * h));
+                double fxx = (g.get(c + 1, r) - 2 * f + g.get(c - 1, r)) / (h * h);
+                double fyy = (g.get(c, r - 1) - 2 * f + g.get(c, r + 1)) / (h * h);
+                double fxy = (g.get(c + 1, r - 1) - g.get(c - 1, r - 1) - g.get(c + 1, r + 1)
+                        + g.get(c - 1, r + 1)) / (4 * h * h);
+                txx[i] = (float) (fxx * fxx + fxy * fxy);
+                tyy[i] = (float) (fyy * fyy + fxy * fxy);
+                txy[i] = (float) (fxy * (fxx + fyy));
             }
         }
-        Grid axx = GaussianSmoother.smooth(Grid.wrap(geo, hxx), orientationM);
-        Grid ayy = GaussianSmoother.smooth(Grid.wrap(geo, hyy), orientationM);
-        Grid axy = GaussianSmoother.smooth(Grid.wrap(geo, hxy), orientationM);
+        Grid axx = GaussianSmoother.smooth(Grid.wrap(geo, txx), orientationM);
+        Grid ayy = GaussianSmoother.smooth(Grid.wrap(geo, tyy), orientationM);
+        Grid axy = GaussianSmoother.smooth(Grid.wrap(geo, txy), orientationM);
         int k = (int) Math.ceil(3 * alongM / h);
         double[] w = new double[k + 1];
         for (int j = 0; j <= k; j++) {
@@ -83,13 +86,8 @@ final class StrikeSmoother {
                     out[i] = f;
                     continue;
                 }
-                // The curvature of largest magnitude is across the ridge: negative on the crest, positive on
-                // the flanks beyond the inflection. The strike is at right angles to it.
-                double phi = 0.5 * Math.atan2(2 * xy, xx - yy);
-                double mean = 0.5 * (xx + yy), rad = Math.hypot(0.5 * (xx - yy), xy);
-                if (Math.abs(mean + rad) > Math.abs(mean - rad)) {
-                    phi += Math.PI / 2;
-                }
+                // Larger eigenvector of the averaged H H: across the ridge; the strike is at right angles.
+                double phi = 0.5 * Math.atan2(2 * xy, xx - yy) + Math.PI / 2;
                 double sx = Math.cos(phi) * h, sy = Math.sin(phi) * h;
                 double x = geo.x(c), y = geo.y(r);
                 double num = w[0] * f, den = w[0];
@@ -108,5 +106,11 @@ final class StrikeSmoother {
             }
         }
         return Grid.wrap(geo, out);
+    }
+
+    private static float[] blank(GridGeometry geo) {
+        float[] v = new float[geo.size()];
+        java.util.Arrays.fill(v, Float.NaN);
+        return v;
     }
 }
