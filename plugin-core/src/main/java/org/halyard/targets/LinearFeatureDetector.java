@@ -19,6 +19,8 @@ import org.locationtech.jts.simplify.DouglasPeuckerSimplifier;
  *
  * <p><b>Algorithm</b> (our own composition of standard steps):
  * <ol>
+ * <li>smoothing: a Gaussian of {@code smoothingM} ({@link GaussianSmoother}), then one of
+ *     {@code strikeSmoothingM} along the local strike ({@link StrikeSmoother});</li>
  * <li>ridge cells by the Hessian test of {@link RidgeCells}, above {@code background + k sigma};</li>
  * <li>linking: 8-connected ridge cells whose directions differ by at most {@code maxTurnDeg} form one piece
  *     (union-find);</li>
@@ -45,6 +47,12 @@ public final class LinearFeatureDetector {
     /** Side of the tiles of the local level, m: several times a cable's ridge width. */
     static final double BACKGROUND_TILE_M = 20;
 
+    /**
+     * Window (standard deviation) over which the Hessian is averaged to find the ridge strike, m: about a
+     * ridge's width, so that the crest's negative curvature across outweighs the beads' along it.
+     */
+    static final double ORIENTATION_M = 2;
+
     /** Smallest piece considered for merging, cells along its axis. */
     static final int MIN_PIECE_CELLS = 3;
 
@@ -59,7 +67,8 @@ public final class LinearFeatureDetector {
      */
     public static List<LinearFeature> detect(Grid analyticSignal, LinearFeatureOptions o, Progress progress) {
         NoiseEstimate noise = NoiseEstimate.of(analyticSignal);
-        Grid smooth = GaussianSmoother.smooth(analyticSignal, o.smoothingM());
+        Grid smooth = StrikeSmoother.smooth(GaussianSmoother.smooth(analyticSignal, o.smoothingM()),
+                o.strikeSmoothingM(), ORIENTATION_M);
         LocalBackground level = LocalBackground.of(smooth, BACKGROUND_TILE_M, noise.background());
         RidgeCells ridges = RidgeCells.find(smooth, level, o.thresholdFactor() * noise.sigma(), o);
         progress.report(40);

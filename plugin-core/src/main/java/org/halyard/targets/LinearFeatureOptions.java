@@ -17,6 +17,9 @@ package org.halyard.targets;
  * @param smoothingM       standard deviation of the Gaussian applied before the ridge test, m: about half the
  *                         survey's sensor-track spacing, to join the beads that line data leave along a ridge
  *                         (0 for none)
+ * @param strikeSmoothingM standard deviation of a second Gaussian applied along the local ridge strike only
+ *                         ({@link StrikeSmoother}), m: about one survey-line spacing, to even out a crest that
+ *                         changes from line to line with the sensors' altitude (0 for none)
  * @param minEulerShare    a ridge is kept as a feature only where Euler deconvolution with the line-source
  *                         index gives an accepted depth at this share of its stations, 0 to 1 (0 keeps every
  *                         ridge); used where the field grids are known ({@link TargetAnalysis})
@@ -24,14 +27,15 @@ package org.halyard.targets;
 public record LinearFeatureOptions(double thresholdFactor, double minAnisotropy, double maxAlongSlope,
                                    double maxTurnDeg, double minLengthM, double maxGapM, double maxDeviationDeg,
                                    double vertexSpacingM, double labelDistanceM, double dominance,
-                                   double smoothingM, double minEulerShare) {
+                                   double smoothingM, double strikeSmoothingM, double minEulerShare) {
 
     /**
      * Defaults for sensors 1 to 5 m above the objects, cells of 0.25 to 1 m, sensor tracks 1 to 3 m apart
-     * (common practice); the gap bridges two lines of a 3 m line spacing and more.
+     * (common practice); the gap bridges two lines of a 3 m line spacing and more, the strike smoothing averages
+     * the crest over about five lines of that spacing.
      */
     public static final LinearFeatureOptions DEFAULT = new LinearFeatureOptions(5, 3, 0.1, 20, 20, 8, 25, 2, 3, 2,
-            1.0, 0.5);
+            1.0, 3.0, 0.5);
 
     public LinearFeatureOptions {
         requirePositive(thresholdFactor, "ridge threshold factor");
@@ -47,8 +51,9 @@ public record LinearFeatureOptions(double thresholdFactor, double minAnisotropy,
         if (!(minEulerShare >= 0 && minEulerShare <= 1)) {
             throw new IllegalArgumentException("Euler share must be between 0 and 1, got " + minEulerShare);
         }
-        if (!(smoothingM >= 0)) {
-            throw new IllegalArgumentException("ridge smoothing must be 0 m or more, got " + smoothingM);
+        if (!(smoothingM >= 0) || !(strikeSmoothingM >= 0)) {
+            throw new IllegalArgumentException("ridge smoothing must be 0 m or more, got " + smoothingM
+                    + " and " + strikeSmoothingM + " along the strike");
         }
         if (!(maxGapM >= 0) || !(labelDistanceM >= 0)) {
             throw new IllegalArgumentException("gap and label distances must be 0 m or more, got " + maxGapM
@@ -59,7 +64,8 @@ public record LinearFeatureOptions(double thresholdFactor, double minAnisotropy,
     /** The same options with another ridge threshold factor and shortest length (the process's parameters). */
     public LinearFeatureOptions withThresholdAndLength(double k, double minLength) {
         return new LinearFeatureOptions(k, minAnisotropy, maxAlongSlope, maxTurnDeg, minLength, maxGapM,
-                maxDeviationDeg, vertexSpacingM, labelDistanceM, dominance, smoothingM, minEulerShare);
+                maxDeviationDeg, vertexSpacingM, labelDistanceM, dominance, smoothingM, strikeSmoothingM,
+                minEulerShare);
     }
 
     private static void requirePositive(double v, String what) {

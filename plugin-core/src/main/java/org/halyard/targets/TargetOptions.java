@@ -38,7 +38,7 @@ public record TargetOptions(PeakOptions peaks, EulerOptions discreteEuler, Euler
                 + " m, depth error <= " + discreteEuler.maxRelativeDepthError() + "; dipole fit (Levenberg-Marquardt)"
                 + " radius " + fit.radiusM() + " m, background " + fit.background().name().toLowerCase(java.util.Locale.ROOT)
                 + "; linear features: Hessian ridges of the analytic signal smoothed by " + linear.smoothingM()
-                + " m, above the 20 m tile median + " + linear.thresholdFactor() + " x noise, at least "
+                + " m and by " + linear.strikeSmoothingM() + " m along their strike, above the 20 m tile median + " + linear.thresholdFactor() + " x noise, at least "
                 + linear.minLengthM() + " m, Euler SI " + linearEuler.structuralIndex() + " accepted at >= "
                 + linear.minEulerShare() + " of the stations; asset buffer " + assetBufferM + " m";
     }

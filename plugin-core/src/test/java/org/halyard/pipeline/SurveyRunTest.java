@@ -94,6 +94,27 @@ class SurveyRunTest {
     }
 
     @Test
+    void findsTheThreeLinearsAndTheirAssets() {
+        // Truth (truth.csv): LIN1 charted TARRIN-C1 at 118.4 degrees, LIN2 the pipe TARRIN-P1 running north-south
+        // across the east-west lines (no tie line over it is gridded), LIN3 uncharted at 81.7 degrees.
+        List<String> assets = new ArrayList<>();
+        double pipeAz = Double.NaN;
+        try (CsvTableReader r = CsvTableReader.open(first.resolve("linear_features.csv"))) {
+            int asset = r.column("asset"), az = r.column("azimuth_deg");
+            while (r.next()) {
+                String a = r.text(asset).toString();
+                assets.add(a);
+                if (a.equals("TARRIN-P1")) {
+                    pipeAz = r.number(az);
+                }
+            }
+        }
+        System.out.printf("demo linears: %s, pipe at %.2f degrees%n", assets, pipeAz);
+        assertThat(assets).containsExactlyInAnyOrder("TARRIN-C1", "TARRIN-P1", "");
+        assertThat(Math.min(pipeAz, 180 - pipeAz)).isLessThanOrEqualTo(2.0); // issue 5: within 2 degrees
+    }
+
+    @Test
     void rerunGivesTheSameBytesExceptTimings() throws IOException {
         Path second = dir.resolve("second");
         new SurveyRun().run(RecipeReader.read(RECIPE), second, RunListener.SILENT);

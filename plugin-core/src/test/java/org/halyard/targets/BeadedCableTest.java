@@ -47,7 +47,7 @@ class BeadedCableTest {
         LinearFeatureOptions l = d.linear();
         LinearFeatureOptions half = new LinearFeatureOptions(l.thresholdFactor(), l.minAnisotropy(), l.maxAlongSlope(),
                 l.maxTurnDeg(), l.minLengthM(), l.maxGapM(), l.maxDeviationDeg(), l.vertexSpacingM(),
-                l.labelDistanceM(), l.dominance(), TRACK_M / 2, l.minEulerShare());
+                l.labelDistanceM(), l.dominance(), TRACK_M / 2, l.strikeSmoothingM(), l.minEulerShare());
         TargetOptions o = new TargetOptions(d.peaks(), d.discreteEuler(), d.linearEuler(), d.fit(), d.mass(), half,
                 d.assetBufferM(), d.assetMinShare(), d.startDepthM());
         result = TargetAnalysis.run(new TargetInputs(beaded, Optional.empty(), lines, SyntheticSurvey.FIELD, 49000,
