@@ -20,7 +20,7 @@ import org.halyard.model.Dipole;
 import org.halyard.model.FieldDirection;
 
 /**
- * Fits a point dipole (position, depth, moment vector, optional constant background) to the total-field
+ * Fits a point dipole (position, depth, moment vector, optional background surface) to the total-field
  * samples of every sensor near a pick.
  *
  * <p><b>Algorithm:</b> the model is the projection of the point-dipole field on the Earth-field direction
@@ -46,6 +46,8 @@ public final class DipoleFit {
     static final double POSITION_STEP = 1e-4;
     /** The source is kept at least this far below the median sensor depth, m. */
     static final double MIN_DEPTH_BELOW_SENSOR = 0.1;
+    /** A quadratic-background refit may place the source at most this many times deeper than the plane fit. */
+    static final double MAX_DEPTH_CHANGE = 1.5;
 
     private DipoleFit() {
     }
@@ -84,7 +86,64 @@ public final class DipoleFit {
             }
         }
         double sensorDepth = LineSamples.medianAt(samples.z(), idx);
-        Model model = new Model(obs, field, options.background().terms, x, y);
+        if (options.background() == DipoleFitOptions.Background.AUTO) {
+            return planeOrQuadratic(obs, target, field, x, y, starts, sensorDepth, options, accept);
+        }
+        return fitStarts(obs, target, field, x, y, starts, sensorDepth, options, options.background(), accept);
+    }
+
+    /**
+     * The plane fit from every start, then the quadratic background tried only where it can pay: first as a
+     * linear solve at the plane fit's source position (moments and background are linear there), and only
+     * when that already lowers the criterion, as a full fit started from the plane's optimum. Isolated
+     * sources keep the plane fit at its cost; a source on a neighbour's flank gets the curvature term.
+     */
+    private static Optional<DipoleFitResult> planeOrQuadratic(double[][] obs, double[] target, FieldDirection field,
+                                                              double x, double y, List<double[]> starts,
+                                                              double sensorDepth, DipoleFitOptions options,
+                                                              java.util.function.Predicate<DipoleFitResult> accept) {
+        DipoleFitOptions.Background plane = DipoleFitOptions.Background.PLANE;
+        DipoleFitOptions.Background quadratic = DipoleFitOptions.Background.QUADRATIC;
+        Optional<DipoleFitResult> best = fitStarts(obs, target, field, x, y, starts, sensorDepth, options, plane,
+                accept);
+        if (best.isEmpty()) {
+            return best;
+        }
+        Dipole d = best.get().dipole();
+        Model quad = new Model(obs, field, quadratic.terms, x, y);
+        double[] q = quad.linearStart(d.x(), d.y(), d.z(), target);
+        double[] v = quad.values(q);
+        double rss = 0;
+        for (int k = 0; k < v.length; k++) {
+            rss += (target[k] - v[k]) * (target[k] - v[k]);
+        }
+        double planeBic = bic(best.get(), 6 + plane.terms);
+        if (bic(rss / v.length, v.length, 6 + quadratic.terms) >= planeBic) {
+            return best;
+        }
+        Optional<DipoleFitResult> refit = optimise(quad, target,
+                new double[] {d.x(), d.y(), d.z() - sensorDepth}, sensorDepth, options).filter(accept);
+        // The curvature term is there to take up a neighbour's field; a refit that instead trades the compact
+        // source for a much deeper, stronger one (which the curvature then cancels) is the wrong minimum.
+        boolean compact = refit.isPresent()
+                && refit.get().depthBelowSensor() <= MAX_DEPTH_CHANGE * best.get().depthBelowSensor();
+        return compact && bic(refit.get(), 6 + quadratic.terms) < planeBic ? refit : best;
+    }
+
+    /** Schwarz's criterion n ln(RSS / n) + k ln n for a fit of {@code k} parameters; lower is better. */
+    private static double bic(DipoleFitResult r, int k) {
+        return bic(r.rms() * r.rms(), r.samples(), k);
+    }
+
+    private static double bic(double meanSquare, int n, int k) {
+        return n * Math.log(Math.max(meanSquare, Double.MIN_NORMAL)) + k * Math.log(n);
+    }
+
+    private static Optional<DipoleFitResult> fitStarts(double[][] obs, double[] target, FieldDirection field,
+                                                       double x, double y, List<double[]> starts, double sensorDepth,
+                                                       DipoleFitOptions options, DipoleFitOptions.Background background,
+                                                       java.util.function.Predicate<DipoleFitResult> accept) {
+        Model model = new Model(obs, field, background.terms, x, y);
         // The starts are independent optimisations of one immutable model: run them on all cores, then pick
         // in start order so the result does not depend on the scheduling.
         List<Optional<DipoleFitResult>> fits = java.util.stream.IntStream.range(0, starts.size()).parallel()
@@ -181,7 +240,15 @@ public final class DipoleFit {
 
         /** Derivative of the background at sample k with respect to its term t: 1, x - x0, y - y0. */
         double backgroundTerm(int k, int t) {
-            return t == 0 ? 1 : t == 1 ? obs[k][0] - xRef : obs[k][1] - yRef;
+            double dx = obs[k][0] - xRef, dy = obs[k][1] - yRef;
+            return switch (t) {
+                case 0 -> 1;
+                case 1 -> dx;
+                case 2 -> dy;
+                case 3 -> dx * dx;
+                case 4 -> dx * dy;
+                default -> dy * dy;
+            };
         }
 
         /** The linear columns at sample k: unit moments then background terms. */
