@@ -88,9 +88,9 @@ class SurveyRunTest {
         System.out.printf("demo score: %d of %d discrete objects picked within 1.5 m (recall %.2f), median "
                 + "position error of the nearest pick %.2f m, %d picks in all%n", found, truth.size(), recall,
                 err[err.length / 2], picks.size());
-        // Regression floor one below the level reached (11 of 20 with the fourth-difference noise and smoothed
-        // picking of issue 5; 8 before).
-        assertThat(found).isGreaterThanOrEqualTo(10);
+        // Regression floor one below the level reached (13 of 20 with the fourth-difference noise, smoothed
+        // picking and the plane-or-quadratic dipole background of issue 5; 8 before).
+        assertThat(found).isGreaterThanOrEqualTo(12);
     }
 
     @Test
