@@ -92,7 +92,7 @@ public final class RecipeReader {
             tl.forEach(t -> ties.add(t.asText()));
         }
         Recipe.Survey survey = new Recipe.Survey(surveyFile, columns, sensors, ties, lag(c, s), microLevelling(c, s),
-                c.flag(s, "skip_bad_rows", false, "survey"));
+                c.bool(s, "skip_bad_rows", false, "survey"));
         Path base = optionalFile(c, dir, root, "base_station");
         Recipe.Field field = null;
         JsonNode f = c.object(root, "field", false);
@@ -108,7 +108,7 @@ public final class RecipeReader {
                 g == null ? DEFAULT_CELL_M : c.number(g, "cell_m", DEFAULT_CELL_M, "grid"),
                 g == null ? 0.25 : c.number(g, "tension", 0.25, "grid"),
                 g == null ? Double.NaN : c.number(g, "blanking_m", Double.NaN, "grid"),
-                g != null && c.flag(g, "tie_lines", false, "grid"));
+                g != null && c.bool(g, "tie_lines", false, "grid"));
         if (!(grid.cellM() > 0)) {
             throw c.error("grid.cell_m", "must be a positive number of metres");
         }
@@ -225,17 +225,6 @@ public final class RecipeReader {
                 throw error(at + "." + key, "must be a number, got " + n);
             }
             return n.asDouble();
-        }
-
-        boolean flag(JsonNode parent, String key, boolean fallback, String at) {
-            JsonNode n = parent.get(key);
-            if (n == null || n.isNull()) {
-                return fallback;
-            }
-            if (!n.isBoolean()) {
-                throw error(at + "." + key, "must be true or false, got " + n);
-            }
-            return n.asBoolean();
         }
 
         Path file(Path dir, JsonNode block, String path, boolean mustExist) {
