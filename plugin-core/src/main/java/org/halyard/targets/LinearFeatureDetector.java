@@ -66,7 +66,16 @@ public final class LinearFeatureDetector {
      * @param progress reports 0 to 100 and is checked for cancellation between steps
      */
     public static List<LinearFeature> detect(Grid analyticSignal, LinearFeatureOptions o, Progress progress) {
-        NoiseEstimate noise = NoiseEstimate.of(analyticSignal);
+        return detect(analyticSignal, NoiseEstimate.of(analyticSignal), o, progress);
+    }
+
+    /**
+     * As {@link #detect(Grid, LinearFeatureOptions, Progress)} with the grid's noise estimate already made.
+     *
+     * @param noise {@link NoiseEstimate#of} of {@code analyticSignal}, nT/m
+     */
+    public static List<LinearFeature> detect(Grid analyticSignal, NoiseEstimate noise, LinearFeatureOptions o,
+                                             Progress progress) {
         Grid smooth = StrikeSmoother.smooth(GaussianSmoother.smooth(analyticSignal, o.smoothingM()),
                 o.strikeSmoothingM(), ORIENTATION_M);
         LocalBackground level = LocalBackground.of(smooth, BACKGROUND_TILE_M, noise.background());

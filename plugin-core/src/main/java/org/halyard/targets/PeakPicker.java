@@ -59,7 +59,16 @@ public final class PeakPicker {
      * @param progress reports 0 to 100 and is checked for cancellation once a row
      */
     public static Result pick(Grid grid, PeakOptions options, Progress progress) {
-        NoiseEstimate noise = NoiseEstimate.of(grid);
+        return pick(grid, NoiseEstimate.of(grid), options, progress);
+    }
+
+    /**
+     * As {@link #pick(Grid, PeakOptions, Progress)} with the grid's noise estimate already made (the
+     * estimate sorts the whole grid; a caller that also traces ridges makes it once for both).
+     *
+     * @param noise {@link NoiseEstimate#of} of {@code grid}, in the grid's unit
+     */
+    public static Result pick(Grid grid, NoiseEstimate noise, PeakOptions options, Progress progress) {
         double threshold = noise.threshold(options.thresholdFactor());
         double rise = threshold - noise.background();
         Grid smooth = GaussianSmoother.smooth(grid, SMOOTHING_CELLS * grid.geometry().cellSize());

@@ -51,7 +51,8 @@ public final class TargetAnalysis {
         AssetMatcher matcher = new AssetMatcher(in.assets(), o.assetBufferM(), o.assetMinShare());
         List<LinearFeature> features = new ArrayList<>();
         List<LinearFeature> texture = new ArrayList<>();
-        for (LinearFeature f : LinearFeatureDetector.detect(as, o.linear(), p.slice(0, 30))) {
+        NoiseEstimate noise = NoiseEstimate.of(as);
+        for (LinearFeature f : LinearFeatureDetector.detect(as, noise, o.linear(), p.slice(0, 30))) {
             double[] depths = stationDepths(in.grids(), f.line(), o.linearEuler());
             if (depths.length < o.linear().minEulerShare() * stationCount(f.line())) {
                 texture.add(f);
@@ -61,7 +62,7 @@ public final class TargetAnalysis {
                     depths.length == 0 ? Double.NaN : NoiseEstimate.median(depths), matcher.match(f.line())));
         }
         GeometryFactory gf = new GeometryFactory();
-        PeakPicker.Result peaks = PeakPicker.pick(as, o.peaks(), p.slice(30, 40));
+        PeakPicker.Result peaks = PeakPicker.pick(as, noise, o.peaks(), p.slice(30, 40));
         // Maxima strung along a texture ridge are beads of that ridge: dropped like the ridge, unless they
         // stand out of it as an object on a cable does.
         List<Peak> list = peaks.peaks().stream()
