@@ -28,21 +28,22 @@ final class GridStage implements Stage {
     public void run(RunContext ctx, Progress p) {
         Recipe.GridBlock g = ctx.recipe().grid();
         boolean[] rows = griddedRows(ctx, g.tieLines());
-        List<SensorTrack> sensors = ctx.survey.sensors();
         int per = count(rows);
+        List<SensorTrack> sensors = ctx.survey.sensors();
         double[] x = new double[per * sensors.size()], y = new double[x.length], v = new double[x.length];
-        int k = 0;
-        for (SensorTrack s : sensors) {
-            k = pick(rows, s.x(), x, k);
-            pick(rows, s.y(), y, k - per);
-            pick(rows, s.value(), v, k - per);
+        for (int s = 0; s < sensors.size(); s++) {
+            SensorTrack t = sensors.get(s);
+            requireRows(t.spec().column(), t.size(), rows);
+            pick(rows, t.x(), x, s * per);
+            pick(rows, t.y(), y, s * per);
+            pick(rows, t.value(), v, s * per);
         }
         GridGeometry geometry = SplineGridder.geometryFor(x, y, g.cellM(), ctx.recipe().crs());
         GriddingOptions options = GriddingOptions.defaults().withTension(g.tension());
         if (Double.isFinite(g.blankingM())) {
             options = options.withBlankDistance(g.blankingM());
         }
-        GradientSamples gradients = gradients(ctx.survey.gradients(), rows);
+        GradientSamples gradients = gradients(ctx.survey.gradients(), rows, per);
         GriddingResult res = gradients == null
                 ? SplineGridder.grid(x, y, v, geometry, options, p.slice(0, 60))
                 : SplineGridder.grid(x, y, v, gradients, geometry, options, p.slice(0, 60));
@@ -102,35 +103,39 @@ final class GridStage implements Stage {
         return n;
     }
 
-    /** Copies {@code from[i]} for the rows in {@code mask} to {@code to} from {@code at}; returns the next free index. */
-    private static int pick(boolean[] mask, double[] from, double[] to, int at) {
+    /** Copies {@code from[i]} for the rows in {@code mask} to {@code to}, starting at index {@code at}. */
+    private static void pick(boolean[] mask, double[] from, double[] to, int at) {
         for (int i = 0; i < mask.length; i++) {
             if (mask[i]) {
                 to[at++] = from[i];
             }
         }
-        return at;
     }
 
-    /** The pair gradients of every sensor pair pooled over the gridded rows, or null when there are none. */
-    private static GradientSamples gradients(List<GradientPoints> pairs, boolean[] rows) {
-        if (pairs.isEmpty()) {
+    private static void requireRows(String what, int size, boolean[] rows) {
+        if (size != rows.length) {
+            throw new IllegalStateException(what + " has " + size + " rows, the survey " + rows.length);
+        }
+    }
+
+    /**
+     * The pair gradients of every sensor pair pooled over the gridded rows ({@code per} of them), or null
+     * when there are none.
+     */
+    private static GradientSamples gradients(List<GradientPoints> pairs, boolean[] rows, int per) {
+        if (pairs.isEmpty() || per == 0) {
             return null;
         }
-        int per = count(rows);
         double[] x = new double[per * pairs.size()], y = new double[x.length];
         double[] gx = new double[x.length], gy = new double[x.length];
-        int k = 0;
-        for (GradientPoints gp : pairs) {
-            if (gp.size() != rows.length) {
-                throw new IllegalStateException("pair " + gp.pair() + " has " + gp.size() + " rows, the survey "
-                        + rows.length);
-            }
-            k = pick(rows, gp.x(), x, k);
-            pick(rows, gp.y(), y, k - per);
-            pick(rows, gp.gx(), gx, k - per);
-            pick(rows, gp.gy(), gy, k - per);
+        for (int k = 0; k < pairs.size(); k++) {
+            GradientPoints gp = pairs.get(k);
+            requireRows("pair " + gp.pair(), gp.size(), rows);
+            pick(rows, gp.x(), x, k * per);
+            pick(rows, gp.y(), y, k * per);
+            pick(rows, gp.gx(), gx, k * per);
+            pick(rows, gp.gy(), gy, k * per);
         }
-        return x.length == 0 ? null : new GradientSamples(x, y, gx, gy);
+        return new GradientSamples(x, y, gx, gy);
     }
 }
