@@ -190,14 +190,21 @@ public final class RecipeReader {
         }
 
         boolean bool(JsonNode parent, String key, boolean fallback, String at) {
+            JsonNode n = optional(parent, key, at, JsonNode::isBoolean, "true or false");
+            return n == null ? fallback : n.asBoolean();
+        }
+
+        /** The value {@code key} of {@code parent}, null when absent or null; refused unless {@code type} holds. */
+        private JsonNode optional(JsonNode parent, String key, String at,
+                                  java.util.function.Predicate<JsonNode> type, String expected) {
             JsonNode n = parent.get(key);
             if (n == null || n.isNull()) {
-                return fallback;
+                return null;
             }
-            if (!n.isBoolean()) {
-                throw error(at + "." + key, "must be true or false, got " + n);
+            if (!type.test(n)) {
+                throw error(at + "." + key, "must be " + expected + ", got " + n);
             }
-            return n.asBoolean();
+            return n;
         }
 
         String text(JsonNode parent, String key, boolean required) {
@@ -217,14 +224,8 @@ public final class RecipeReader {
         }
 
         double number(JsonNode parent, String key, double fallback, String at) {
-            JsonNode n = parent.get(key);
-            if (n == null || n.isNull()) {
-                return fallback;
-            }
-            if (!n.isNumber()) {
-                throw error(at + "." + key, "must be a number, got " + n);
-            }
-            return n.asDouble();
+            JsonNode n = optional(parent, key, at, JsonNode::isNumber, "a number");
+            return n == null ? fallback : n.asDouble();
         }
 
         Path file(Path dir, JsonNode block, String path, boolean mustExist) {
