@@ -153,7 +153,8 @@ public final class CsvTableReader implements Closeable {
     public void requireFields(int n) {
         if (fieldCount < n) {
             String first = fieldCount < header.size() ? ", column '" + header.get(fieldCount) + "'" : "";
-            throw new IllegalArgumentException(file + ": line " + lineNumber + first + ": truncated row, " + fieldCount + " fields where the header has " + header.size());
+            throw new IllegalArgumentException(file + ": line " + lineNumber + first + ": truncated row, "
+                    + fieldCount + " fields where the header has " + header.size());
         }
     }
 

@@ -12,9 +12,9 @@ import org.geotools.api.referencing.operation.TransformException;
  * convergence.
  *
  * <p><b>Algorithm:</b> the projection's own conversion from its base geographic CRS (GeoTools
- * referencing, EPSG database; decoded by {@link GeoTiffGrids#decode}, the package's one decoder). Grid convergence is found numerically: the point is moved 1e-4 degree
- * north and south along its meridian and the direction of that chord in grid coordinates gives the angle between
- * true north and grid north.
+ * referencing, EPSG database; decoded by {@link GeoTiffGrids#decode}, the package's one decoder). Grid
+ * convergence is found numerically: the point is moved 1e-4 degree north and south along its meridian and
+ * the direction of that chord in grid coordinates gives the angle between true north and grid north.
  *
  * <p><b>Accuracy:</b> convergence to about 1e-6 degree (the finite step; checked against PROJ's
  * {@code proj -V} in the test). Coordinates as exact as the GeoTools projection.

@@ -110,11 +110,11 @@ public final class SurveyCsvReader {
             int row = 0;
             int indexInLine = 0;
             SkippedRows skipped = new SkippedRows(file, skipBadRows);
+            double[] vv = new double[ns]; // one row's sensor values, kept until the row is known good
             while (r.next()) {
                 boolean newLine = false;
                 String id = current;
                 double tt, xx, yy, aa, dd;
-                double[] vv = new double[ns];
                 try {
                     r.requireFields(maxCol + 1);
                     newLine = current == null || !r.textEquals(cLine, current);
