@@ -30,16 +30,25 @@ public record TargetOptions(PeakOptions peaks, EulerOptions discreteEuler, Euler
 
     /** A one-line account of the methods and parameters, for output metadata. */
     public String describe() {
-        return "peaks: local maxima of the analytic signal (Gaussian-smoothed, 1 cell) above the 10 m tile median + "
-                + peaks.thresholdFactor() + " x fourth-difference noise (1.4826 MAD / sqrt 70), window " + (2 * peaks.windowCells() + 1) + " cells, separation "
+        return "peaks: local maxima of the analytic signal (Gaussian-smoothed, " + num(PeakPicker.SMOOTHING_CELLS)
+                + " cell) above the " + num(PeakPicker.BACKGROUND_TILE_M) + " m tile median + " + peaks.thresholdFactor()
+                + " x fourth-difference noise (1.4826 MAD / sqrt 70), window " + (2 * peaks.windowCells() + 1)
+                + " cells, separation "
                 + peaks.minSeparationM() + " m, parabolic sub-cell refinement; Euler deconvolution (Thompson 1982,"
                 + " Reid et al. 1990) SI " + discreteEuler.structuralIndex() + " discrete / SI "
                 + linearEuler.structuralIndex() + " linear, windows " + discreteEuler.windowSizesM()
                 + " m, depth error <= " + discreteEuler.maxRelativeDepthError() + "; dipole fit (Levenberg-Marquardt)"
                 + " radius " + fit.radiusM() + " m, background " + fit.background().name().toLowerCase(java.util.Locale.ROOT)
                 + "; linear features: Hessian ridges of the analytic signal smoothed by " + linear.smoothingM()
-                + " m and by " + linear.strikeSmoothingM() + " m along their strike, above the 20 m tile median + " + linear.thresholdFactor() + " x noise, at least "
+                + " m and by " + linear.strikeSmoothingM() + " m along their strike, above the "
+                + num(LinearFeatureDetector.BACKGROUND_TILE_M) + " m tile median + " + linear.thresholdFactor()
+                + " x noise, at least "
                 + linear.minLengthM() + " m, Euler SI " + linearEuler.structuralIndex() + " accepted at >= "
                 + linear.minEulerShare() + " of the stations; asset buffer " + assetBufferM + " m";
+    }
+
+    /** A whole number without its ".0", as the description has always printed these figures. */
+    private static String num(double v) {
+        return v == Math.rint(v) ? Long.toString((long) v) : Double.toString(v);
     }
 }
