@@ -83,20 +83,6 @@ public final class GridSpectrum {
         GridGeometry g = grid.geometry();
         int h = g.rows(), w = g.columns();
         LinearTrend trend = LinearTrend.fit(grid);
-        float[] v = grid.toArray();
-        boolean[] blank = new boolean[v.length];
-        for (int r = 0; r < h; r++) {
-            double y = g.y(r);
-            for (int c = 0; c < w; c++) {
-                int i = r * w + c;
-                if (Float.isNaN(v[i])) {
-                    blank[i] = true;
-                } else {
-                    v[i] -= (float) trend.at(g.x(c), y);
-                }
-            }
-        }
-        BlankFill.fill(v, w, h);
         int nr = FftSizes.smoothAtLeast((int) Math.ceil(h * padFactor));
         int nc = FftSizes.smoothAtLeast((int) Math.ceil(w * padFactor));
         long need = (long) nr * (nc + 2);
@@ -112,7 +98,34 @@ public final class GridSpectrum {
                     + " grid: it needs about " + (need * 8 / (1 << 20)) + " MiB; raise -Xmx (HALYARD_JAVA_OPTS)");
         }
         int stride = nc + 2;
-        PadExtension.extend(v, w, h, s, stride, nc, nr);
+        // The detrended values go straight into the transform array: no grid-sized copy on the way.
+        boolean[] blank = new boolean[w * h];
+        int nBlank = 0;
+        for (int r = 0; r < h; r++) {
+            double y = g.y(r);
+            for (int c = 0; c < w; c++) {
+                float v = grid.get(c, r);
+                if (Float.isNaN(v)) {
+                    blank[r * w + c] = true;
+                    nBlank++;
+                    s[r * stride + c] = Float.NaN;
+                } else {
+                    s[r * stride + c] = v - (float) trend.at(g.x(c), y);
+                }
+            }
+        }
+        if (nBlank > 0) {
+            // The fill works on a compact array; only grids with blanks pay for the copy.
+            float[] v = new float[w * h];
+            for (int r = 0; r < h; r++) {
+                System.arraycopy(s, r * stride, v, r * w, w);
+            }
+            BlankFill.fill(v, w, h);
+            for (int r = 0; r < h; r++) {
+                System.arraycopy(v, r * w, s, r * stride, w);
+            }
+        }
+        PadExtension.extend(s, w, h, stride, nc, nr);
         p.report(10);
         p.checkCanceled();
         forward(s, nr, nc, p.slice(10, 100));

@@ -12,13 +12,10 @@ final class PadExtension {
     }
 
     /**
-     * Copies the {@code w x h} data {@code v} into the top-left of {@code out} (row stride {@code stride},
-     * padded size {@code nc x nr}) and fills the pad.
+     * Fills the pad of {@code out}, whose top-left {@code w x h} cells (row stride {@code stride}) already
+     * hold the data, out to the padded size {@code nc x nr}.
      */
-    static void extend(float[] v, int w, int h, float[] out, int stride, int nc, int nr) {
-        for (int r = 0; r < h; r++) {
-            System.arraycopy(v, r * w, out, r * stride, w);
-        }
+    static void extend(float[] out, int w, int h, int stride, int nc, int nr) {
         int pc = nc - w;
         double[] blendC = weights(pc);
         for (int r = 0; r < h; r++) {
