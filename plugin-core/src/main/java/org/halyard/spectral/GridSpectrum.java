@@ -83,6 +83,24 @@ public final class GridSpectrum {
         GridGeometry g = grid.geometry();
         int h = g.rows(), w = g.columns();
         LinearTrend trend = LinearTrend.fit(grid);
+        boolean[] blank = new boolean[w * h];
+        int nBlank = 0;
+        for (int i = 0; i < blank.length; i++) {
+            if (Float.isNaN(grid.get(i))) {
+                blank[i] = true;
+                nBlank++;
+            }
+        }
+        // Blanks are filled on a compact copy before the transform array exists, so the fill's workspace and
+        // the transform array are never live together; a grid without blanks needs no copy at all.
+        float[] filled = null;
+        if (nBlank > 0) {
+            filled = new float[w * h];
+            for (int r = 0; r < h; r++) {
+                detrendRow(grid, trend, blank, r, filled, r * w);
+            }
+            BlankFill.fill(filled, w, h);
+        }
         int nr = FftSizes.smoothAtLeast((int) Math.ceil(h * padFactor));
         int nc = FftSizes.smoothAtLeast((int) Math.ceil(w * padFactor));
         long need = (long) nr * (nc + 2);
@@ -98,39 +116,30 @@ public final class GridSpectrum {
                     + " grid: it needs about " + (need * 8 / (1 << 20)) + " MiB; raise -Xmx (HALYARD_JAVA_OPTS)");
         }
         int stride = nc + 2;
-        // The detrended values go straight into the transform array: no grid-sized copy on the way.
-        boolean[] blank = new boolean[w * h];
-        int nBlank = 0;
         for (int r = 0; r < h; r++) {
-            double y = g.y(r);
-            for (int c = 0; c < w; c++) {
-                float v = grid.get(c, r);
-                if (Float.isNaN(v)) {
-                    blank[r * w + c] = true;
-                    nBlank++;
-                    s[r * stride + c] = Float.NaN;
-                } else {
-                    s[r * stride + c] = v - (float) trend.at(g.x(c), y);
-                }
+            if (filled != null) {
+                System.arraycopy(filled, r * w, s, r * stride, w);
+            } else {
+                detrendRow(grid, trend, blank, r, s, r * stride);
             }
         }
-        if (nBlank > 0) {
-            // The fill works on a compact array; only grids with blanks pay for the copy.
-            float[] v = new float[w * h];
-            for (int r = 0; r < h; r++) {
-                System.arraycopy(s, r * stride, v, r * w, w);
-            }
-            BlankFill.fill(v, w, h);
-            for (int r = 0; r < h; r++) {
-                System.arraycopy(v, r * w, s, r * stride, w);
-            }
-        }
+        filled = null; // collectable during the transform, whatever the JIT knows of liveness
         PadExtension.extend(s, w, h, stride, nc, nr);
         p.report(10);
         p.checkCanceled();
         forward(s, nr, nc, p.slice(10, 100));
         p.report(100);
         return new GridSpectrum(g, trend, blank, nr, nc, s);
+    }
+
+    /** Row {@code r} of {@code grid} less the plane into {@code dst} from {@code off}; blank cells get NaN. */
+    private static void detrendRow(Grid grid, LinearTrend trend, boolean[] blank, int r, float[] dst, int off) {
+        GridGeometry g = grid.geometry();
+        int w = g.columns();
+        double y = g.y(r);
+        for (int c = 0; c < w; c++) {
+            dst[off + c] = blank[r * w + c] ? Float.NaN : grid.get(c, r) - (float) trend.at(g.x(c), y);
+        }
     }
 
     /**
