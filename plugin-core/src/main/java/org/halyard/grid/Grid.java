@@ -13,18 +13,24 @@ import java.util.function.DoubleBinaryOperator;
  * <p><b>Thread safety:</b> immutable, so safe to share. The backing array never escapes: {@link #toArray()}
  * copies, and the factories copy unless their name says they take ownership.
  */
-public final class Grid {
+public final class Grid implements GridRows {
 
     private final GridGeometry geometry;
-    private final float[] values;
+    private final float[] values;   // the grid's values in its leading geometry.size() cells
+    private final int size;
 
     private Grid(GridGeometry geometry, float[] values) {
-        if (values.length != geometry.size()) {
-            throw new IllegalArgumentException("expected " + geometry.size() + " values for a "
-                    + geometry.columns() + " x " + geometry.rows() + " grid, got " + values.length);
+        this(geometry, values, false);
+    }
+
+    private Grid(GridGeometry geometry, float[] values, boolean leading) {
+        if (leading ? values.length < geometry.size() : values.length != geometry.size()) {
+            throw new IllegalArgumentException("expected " + (leading ? "at least " : "") + geometry.size()
+                    + " values for a " + geometry.columns() + " x " + geometry.rows() + " grid, got " + values.length);
         }
         this.geometry = geometry;
         this.values = values;
+        this.size = geometry.size();
     }
 
     /** A grid holding a copy of {@code values} (row-major, row 0 north). */
@@ -38,6 +44,15 @@ public final class Grid {
      */
     public static Grid wrap(GridGeometry geometry, float[] values) {
         return new Grid(geometry, values);
+    }
+
+    /**
+     * As {@link #wrap}, for an array that may be longer than the grid: the grid is its leading
+     * {@code geometry.size()} values and the rest is ignored. For kernels that finish in a larger work
+     * array, so that the result needs no copy.
+     */
+    public static Grid wrapLeading(GridGeometry geometry, float[] values) {
+        return new Grid(geometry, values, true);
     }
 
     /** A grid holding {@code values} rounded to float (row-major, row 0 north). */
@@ -68,6 +83,7 @@ public final class Grid {
         return new Grid(geometry, v);
     }
 
+    @Override
     public GridGeometry geometry() {
         return geometry;
     }
@@ -90,14 +106,27 @@ public final class Grid {
         return values[i];
     }
 
+    /** Copies the rows at a row stride of the caller's choosing; see {@link GridRows}. */
+    @Override
+    public void copyRows(float[] dst, int stride) {
+        int w = geometry.columns(), h = geometry.rows();
+        if (stride < w || (long) (h - 1) * stride + w > dst.length) {
+            throw new IllegalArgumentException("a " + w + " x " + h + " grid does not fit " + dst.length
+                    + " floats at row stride " + stride);
+        }
+        for (int r = 0; r < h; r++) {
+            System.arraycopy(values, r * w, dst, r * stride, w);
+        }
+    }
+
     /** A copy of the values, row-major, row 0 north. */
     public float[] toArray() {
-        return values.clone();
+        return Arrays.copyOf(values, size);
     }
 
     /** The values as doubles, row-major, row 0 north. */
     public double[] toDoubleArray() {
-        double[] d = new double[values.length];
+        double[] d = new double[size];
         for (int i = 0; i < d.length; i++) {
             d[i] = values[i];
         }
@@ -112,8 +141,8 @@ public final class Grid {
     /** Number of cells that are not blank. */
     public int validCount() {
         int n = 0;
-        for (float v : values) {
-            if (!Float.isNaN(v)) {
+        for (int i = 0; i < size; i++) {
+            if (!Float.isNaN(values[i])) {
                 n++;
             }
         }
@@ -143,7 +172,8 @@ public final class Grid {
     /** Smallest and largest non-blank value, {@code {NaN, NaN}} when every cell is blank. */
     public double[] range() {
         double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
-        for (float v : values) {
+        for (int i = 0; i < size; i++) {
+            float v = values[i];
             if (!Float.isNaN(v)) {
                 lo = Math.min(lo, v);
                 hi = Math.max(hi, v);

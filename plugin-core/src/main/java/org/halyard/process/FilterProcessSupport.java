@@ -24,7 +24,7 @@ final class FilterProcessSupport {
         ListenerProgress p = ListenerProgress.of(monitor);
         p.listener().started();
         Grid grid = GeoTiffGrids.fromCoverage(data, noData(data), "input grid");
-        Grid out = new FilterBank(grid, settings).apply(op, p);
+        Grid out = FilterBank.once(grid, settings).apply(op, p);
         GridCoverage2D result = GeoTiffGrids.toCoverage(out, op.cliName());
         p.listener().complete();
         return result;

@@ -4,6 +4,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import java.util.stream.IntStream;
 import org.halyard.grid.Grid;
 import org.halyard.grid.GridGeometry;
+import org.halyard.grid.GridRows;
 import org.halyard.grid.Progress;
 import org.jtransforms.fft.FloatFFT_1D;
 
@@ -23,6 +24,13 @@ import org.jtransforms.fft.FloatFFT_1D;
  * </ol>
  * {@link #filter} multiplies by a {@link WavenumberResponse}, transforms back, crops, adds the plane as
  * the filter transforms it and re-blanks the cells that were blank.
+ *
+ * <p><b>Memory:</b> only the row transforms of the data rows are kept ({@code rows x (nc + 2)} floats).
+ * The pad rows are linear combinations of data rows ({@link PadExtension}), so their row transforms are
+ * made from the data rows' on the fly, column block by column block, just before the column transform;
+ * each block is transformed, filtered and transformed back in one go, and only its data rows are kept.
+ * The padded 2-D spectrum never exists whole. {@link #filterConsuming} works in the spectrum's own array,
+ * so a one-off filter needs the one array and nothing of the grid's size besides.
  *
  * <p>FFT convention: forward {@code X(k) = sum x(n) exp(-2 pi i k n / N)}, inverse scaled by {@code 1/N}
  * (JTransforms, as NumPy). Wavenumbers: kx = 2 pi j / (Nx dx) towards east; because row 0 is north,
@@ -48,12 +56,13 @@ public final class GridSpectrum {
 
     private final GridGeometry geometry;
     private final LinearTrend trend;
-    private final boolean[] blank;
+    private final boolean[] blank;   // null when no cell is blank
     private final int rows, cols;    // data size
-    private final int nr, nc;        // padded size; spectrum rows are nc + 2 floats (nc/2 + 1 complex)
-    private final float[] spectrum;
+    private final int nr, nc;        // padded size; stored rows are nc + 2 floats (nc/2 + 1 complex)
+    private final PadExtension rowPad;
+    private float[] rowSpectrum;     // the data rows' transforms; null once consumed
 
-    private GridSpectrum(GridGeometry geometry, LinearTrend trend, boolean[] blank, int nr, int nc, float[] spectrum) {
+    private GridSpectrum(GridGeometry geometry, LinearTrend trend, boolean[] blank, int nr, int nc, float[] rowSpectrum) {
         this.geometry = geometry;
         this.trend = trend;
         this.blank = blank;
@@ -61,115 +70,143 @@ public final class GridSpectrum {
         this.cols = geometry.columns();
         this.nr = nr;
         this.nc = nc;
-        this.spectrum = spectrum;
+        this.rowPad = PadExtension.of(rows, nr);
+        this.rowSpectrum = rowSpectrum;
     }
 
     /** Prepares the spectrum of {@code grid} with the minimum padding factor. */
-    public static GridSpectrum of(Grid grid, Progress progress) {
+    public static GridSpectrum of(GridRows grid, Progress progress) {
         return of(grid, MIN_PAD_FACTOR, progress);
     }
 
     /**
-     * Prepares the spectrum of {@code grid}.
+     * Prepares the spectrum of {@code grid} (values in any unit, nT for a total field; a projected CRS in
+     * metres). The grid's rows are asked for once, straight into the transform array.
      *
      * @param padFactor padded size over data size per side, at least {@value #MIN_PAD_FACTOR}
-     * @throws IllegalArgumentException when the grid is entirely blank or the padded grid would not fit
+     * @throws IllegalArgumentException when the grid is entirely blank or the transform would not fit
      */
-    public static GridSpectrum of(Grid grid, double padFactor, Progress progress) {
+    public static GridSpectrum of(GridRows grid, double padFactor, Progress progress) {
         if (!(padFactor >= MIN_PAD_FACTOR) || padFactor > 8) {
             throw new IllegalArgumentException("padding factor must be between 1.5 and 8, got " + padFactor);
         }
         Progress p = Progress.orNone(progress);
         GridGeometry g = grid.geometry();
         int h = g.rows(), w = g.columns();
-        LinearTrend trend = LinearTrend.fit(grid);
-        boolean[] blank = new boolean[w * h];
-        int nBlank = 0;
-        for (int i = 0; i < blank.length; i++) {
-            if (Float.isNaN(grid.get(i))) {
-                blank[i] = true;
-                nBlank++;
-            }
-        }
-        // Blanks are filled on a compact copy before the transform array exists, so the fill's workspace and
-        // the transform array are never live together; a grid without blanks needs no copy at all.
-        float[] filled = null;
-        if (nBlank > 0) {
-            filled = new float[w * h];
-            for (int r = 0; r < h; r++) {
-                detrendRow(grid, trend, blank, r, filled, r * w);
-            }
-            BlankFill.fill(filled, w, h);
-        }
         int nr = FftSizes.smoothAtLeast((int) Math.ceil(h * padFactor));
         int nc = FftSizes.smoothAtLeast((int) Math.ceil(w * padFactor));
-        long need = (long) nr * (nc + 2);
-        if (need > Integer.MAX_VALUE - 8) {
-            throw new IllegalArgumentException("grid of " + w + " x " + h + " is too large for the transform ("
-                    + nc + " x " + nr + " padded)");
-        }
-        float[] s;
-        try {
-            s = new float[(int) need];
-        } catch (OutOfMemoryError e) {
-            throw new IllegalArgumentException("not enough memory for the transform of a " + w + " x " + h
-                    + " grid: it needs about " + (need * 8 / (1 << 20)) + " MiB; raise -Xmx (HALYARD_JAVA_OPTS)");
-        }
         int stride = nc + 2;
-        for (int r = 0; r < h; r++) {
-            if (filled != null) {
+        float[] s = allocate((long) h * stride, w, h, nc, nr);
+        grid.copyRows(s, stride);
+        p.report(5);
+        p.checkCanceled();
+        LinearTrend trend = LinearTrend.fit(g, s, stride);
+        boolean[] blank = blanks(s, w, h, stride);
+        if (blank != null) {
+            // Blanks are filled on a compact copy; the fill's workspace is needed only for such grids.
+            float[] filled = new float[w * h];
+            for (int r = 0; r < h; r++) {
+                detrendRow(g, trend, s, r, r * stride);
+                System.arraycopy(s, r * stride, filled, r * w, w);
+            }
+            BlankFill.fill(filled, w, h);
+            for (int r = 0; r < h; r++) {
                 System.arraycopy(filled, r * w, s, r * stride, w);
-            } else {
-                detrendRow(grid, trend, blank, r, s, r * stride);
             }
         }
-        filled = null; // collectable during the transform, whatever the JIT knows of liveness
-        PadExtension.extend(s, w, h, stride, nc, nr);
         p.report(10);
         p.checkCanceled();
-        forward(s, nr, nc, p.slice(10, 100));
+        PadExtension colPad = PadExtension.of(w, nc);
+        AtomicInteger done = new AtomicInteger();
+        parallel(h, r -> new FloatFFT_1D(nc), (fft, r) -> {
+            if (blank == null) {
+                detrendRow(g, trend, s, r, r * stride);
+            }
+            colPad.fill(s, r * stride);
+            transformRow(fft, s, r * stride, nc);
+            if ((done.incrementAndGet() & 255) == 0) {
+                p.report(10 + 90.0 * done.get() / h);
+            }
+        });
         p.report(100);
         return new GridSpectrum(g, trend, blank, nr, nc, s);
     }
 
-    /** Row {@code r} of {@code grid} less the plane into {@code dst} from {@code off}; blank cells get NaN. */
-    private static void detrendRow(Grid grid, LinearTrend trend, boolean[] blank, int r, float[] dst, int off) {
-        GridGeometry g = grid.geometry();
-        int w = g.columns();
-        double y = g.y(r);
-        for (int c = 0; c < w; c++) {
-            dst[off + c] = blank[r * w + c] ? Float.NaN : grid.get(c, r) - (float) trend.at(g.x(c), y);
+    private static float[] allocate(long need, int w, int h, int nc, int nr) {
+        if (need > Integer.MAX_VALUE - 8) {
+            throw new IllegalArgumentException("grid of " + w + " x " + h + " is too large for the transform ("
+                    + nc + " x " + nr + " padded)");
         }
+        try {
+            return new float[(int) need];
+        } catch (OutOfMemoryError e) {
+            throw new IllegalArgumentException("not enough memory for the transform of a " + w + " x " + h
+                    + " grid: it needs about " + (need * 4 / (1 << 20)) + " MiB; raise -Xmx (HALYARD_JAVA_OPTS)");
+        }
+    }
+
+    /** The blank mask of the {@code w x h} cells at row stride {@code stride}, or null when none is blank. */
+    private static boolean[] blanks(float[] s, int w, int h, int stride) {
+        boolean[] blank = null;
+        int valid = 0;
+        for (int r = 0; r < h; r++) {
+            for (int c = 0; c < w; c++) {
+                if (Float.isNaN(s[r * stride + c])) {
+                    if (blank == null) {
+                        blank = new boolean[w * h];
+                    }
+                    blank[r * w + c] = true;
+                } else {
+                    valid++;
+                }
+            }
+        }
+        if (valid == 0) {
+            throw new IllegalArgumentException("every cell of the grid is blank");
+        }
+        return blank;
+    }
+
+    /** Removes the plane from row {@code r}, which starts at {@code s[off]}; blank cells stay NaN. */
+    private static void detrendRow(GridGeometry g, LinearTrend trend, float[] s, int r, int off) {
+        double y = g.y(r);
+        for (int c = 0, w = g.columns(); c < w; c++) {
+            s[off + c] -= (float) trend.at(g.x(c), y);
+        }
+    }
+
+    /**
+     * Real forward transform of the {@code nc} values at {@code s[off]}, unpacked in place to
+     * {@code nc/2 + 1} interleaved complex values ({@code nc + 2} floats).
+     */
+    private static void transformRow(FloatFFT_1D fft, float[] s, int off, int nc) {
+        fft.realForward(s, off);
+        // unpack JTransforms' layout {Re0, Re(n/2), Re1, Im1, ...} to n/2 + 1 complex values
+        s[off + nc] = s[off + 1];
+        s[off + 1] = 0;
+        s[off + nc + 1] = 0;
     }
 
     /**
      * In-place real 2-D forward transform of the {@code nr x nc} array {@code s} stored with row stride
      * {@code nc + 2}: afterwards row q holds the {@code nc/2 + 1} complex coefficients
      * {@code X[q][j] = sum x[r][c] exp(-2 pi i (q r / nr + j c / nc))} as interleaved (re, im), the layout
-     * and sign of NumPy's {@code rfft2}. {@code nc} must be even.
+     * and sign of NumPy's {@code rfft2}. {@code nc} must be even. The two steps are the ones
+     * {@link #of} and {@link #filter} use; this whole transform serves the reference tests.
      */
     static void forward(float[] s, int nr, int nc, Progress p) {
         int stride = nc + 2;
-        parallel(nr, r -> new FloatFFT_1D(nc), (fft, r) -> {
-            int off = r * stride;
-            fft.realForward(s, off);
-            // unpack JTransforms' layout {Re0, Re(n/2), Re1, Im1, ...} to n/2 + 1 complex values
-            s[off + nc] = s[off + 1];
-            s[off + 1] = 0;
-            s[off + nc + 1] = 0;
-        });
-        p.report(40);
-        p.checkCanceled();
+        parallel(nr, r -> new FloatFFT_1D(nc), (fft, r) -> transformRow(fft, s, r * stride, nc));
         int ncols = nc / 2 + 1;
-        parallel(blocks(ncols), t -> new Columns(nr), (cols, b) -> {
+        parallel(blocks(ncols), t -> new Columns(nr), (block, b) -> {
             int k0 = b * Columns.BLOCK, n = Math.min(Columns.BLOCK, ncols - k0);
-            cols.gather(s, stride, k0, n, nr);
+            block.gather(s, stride, k0, n, nr);
             for (int j = 0; j < n; j++) {
-                cols.fft.complexForward(cols.buf[j]);
+                block.fft.complexForward(block.buf[j]);
             }
-            cols.scatter(s, stride, k0, n, nr);
+            block.scatter(s, stride, k0, n, nr);
         });
-        p.report(100);
+        Progress.orNone(p).report(100);
     }
 
     private static int blocks(int ncols) {
@@ -194,6 +231,8 @@ public final class GridSpectrum {
     /**
      * The grid filtered by {@code response}, on the source geometry, blanks where the source was blank.
      * The unit is the source unit as the response changes it (e.g. nT/m for a first derivative).
+     *
+     * @throws IllegalStateException after {@link #filterConsuming}
      */
     public Grid filter(WavenumberResponse response, Progress progress) {
         return Grid.wrap(geometry, filterToArray(response, progress));
@@ -201,15 +240,49 @@ public final class GridSpectrum {
 
     /** As {@link #filter} but the values only, row-major, row 0 north. */
     public float[] filterToArray(WavenumberResponse response, Progress progress) {
-        Progress p = Progress.orNone(progress);
-        int stride = nc + 2;
+        float[] src = requireSpectrum();
         float[] work;
         try {
-            work = new float[rows * stride];
+            work = new float[rows * (nc + 2)];
         } catch (OutOfMemoryError e) {
             throw new IllegalArgumentException("not enough memory to filter a " + cols + " x " + rows
                     + " grid; raise -Xmx (HALYARD_JAVA_OPTS)");
         }
+        transformBack(response, src, work, Progress.orNone(progress));
+        float[] out = new float[rows * cols];
+        compact(work, out);
+        return out;
+    }
+
+    /**
+     * As {@link #filter}, working in the spectrum's own array, which the result then occupies: nothing of
+     * the grid's size is allocated. The spectrum cannot be used again.
+     *
+     * @throws IllegalStateException when the spectrum was consumed before
+     */
+    public Grid filterConsuming(WavenumberResponse response, Progress progress) {
+        float[] s = requireSpectrum();
+        rowSpectrum = null;
+        transformBack(response, s, s, Progress.orNone(progress));
+        compact(s, s);
+        return Grid.wrapLeading(geometry, s);
+    }
+
+    private float[] requireSpectrum() {
+        if (rowSpectrum == null) {
+            throw new IllegalStateException("this spectrum was consumed by filterConsuming");
+        }
+        return rowSpectrum;
+    }
+
+    /**
+     * Filters the row transforms in {@code src} into {@code dst} (the same array or another of its size):
+     * per block of spectrum columns, the pad rows are made, the columns transformed, multiplied by the
+     * response and transformed back; then each data row is transformed back, the plane (as filtered) added
+     * and blanks restored, in the strided layout.
+     */
+    private void transformBack(WavenumberResponse response, float[] src, float[] dst, Progress p) {
+        int stride = nc + 2;
         double dkx = 2 * Math.PI / (nc * geometry.cellSize());
         double dky = 2 * Math.PI / (nr * geometry.cellSize());
         AtomicInteger done = new AtomicInteger();
@@ -217,13 +290,15 @@ public final class GridSpectrum {
         int nblocks = blocks(ncols);
         parallel(nblocks, t -> new Columns(nr), (block, bi) -> {
             int k0 = bi * Columns.BLOCK, n = Math.min(Columns.BLOCK, ncols - k0);
-            block.gather(spectrum, stride, k0, n, nr);
+            block.gather(src, stride, k0, n, rows);
+            block.padRows(rowPad, rows, n);
             double[] h = block.h;
             for (int j = 0; j < n; j++) {
                 int k = k0 + j;
                 double kx = k * dkx;
                 boolean nyqX = k == nc / 2;
                 float[] b = block.buf[j];
+                block.fft.complexForward(b);
                 for (int q = 0; q < nr; q++) {
                     int f = q <= nr / 2 ? q : q - nr;
                     double ky = -f * dky; // row index runs south
@@ -234,27 +309,32 @@ public final class GridSpectrum {
                 }
                 block.fft.complexInverse(b, true);
             }
-            block.scatter(work, stride, k0, n, rows);
+            block.scatter(dst, stride, k0, n, rows);
             int d = done.incrementAndGet();
             if ((d & 7) == 0) {
                 p.report(80.0 * d / nblocks);
             }
         });
         p.checkCanceled();
-        float[] out = new float[rows * cols];
         LinearTrend t = response.onTrend(trend);
         parallel(rows, r -> new FloatFFT_1D(nc), (fft, r) -> {
             int off = r * stride;
-            work[off + 1] = work[off + nc]; // repack the Nyquist real part for JTransforms
-            fft.realInverse(work, off, true);
+            dst[off + 1] = dst[off + nc]; // repack the Nyquist real part for JTransforms
+            fft.realInverse(dst, off, true);
             double y = geometry.y(r);
             for (int c = 0; c < cols; c++) {
-                int i = r * cols + c;
-                out[i] = blank[i] ? Float.NaN : (float) (work[off + c] + t.at(geometry.x(c), y));
+                dst[off + c] = blank != null && blank[r * cols + c] ? Float.NaN
+                        : (float) (dst[off + c] + t.at(geometry.x(c), y));
             }
         });
         p.report(100);
-        return out;
+    }
+
+    /** Moves the data cells of the strided rows in {@code work} to row-major {@code out} (may be {@code work}). */
+    private void compact(float[] work, float[] out) {
+        for (int r = 0; r < rows; r++) {
+            System.arraycopy(work, r * (nc + 2), out, r * cols, cols); // forward overlap is safe in arraycopy
+        }
     }
 
     private static void responseAt(WavenumberResponse response, double kx, double ky, boolean nyqX, boolean nyqY,
@@ -291,6 +371,19 @@ public final class GridSpectrum {
                 for (int j = 0; j < n; j++) {
                     buf[j][2 * q] = s[off + 2 * j];
                     buf[j][2 * q + 1] = s[off + 2 * j + 1];
+                }
+            }
+        }
+
+        /** Rows {@code h} onwards of the first {@code n} columns from the data rows, as {@code pad} says. */
+        void padRows(PadExtension pad, int h, int n) {
+            for (int j = 0; j < n; j++) {
+                float[] b = buf[j];
+                for (int i = 0; i < pad.size(); i++) {
+                    int q = 2 * (h + i), a = 2 * pad.near[i], z = 2 * pad.far[i];
+                    double wa = pad.nearWeight[i], wz = pad.farWeight[i];
+                    b[q] = (float) (wa * b[a] + wz * b[z]);
+                    b[q + 1] = (float) (wa * b[a + 1] + wz * b[z + 1]);
                 }
             }
         }

@@ -1,6 +1,5 @@
 package org.halyard.spectral;
 
-import org.halyard.grid.Grid;
 import org.halyard.grid.GridGeometry;
 
 /**
@@ -25,16 +24,18 @@ public record LinearTrend(double a, double bx, double by, double x0, double y0) 
         return a + bx * (x - x0) + by * (y - y0);
     }
 
-    /** Least-squares plane through the non-blank cells of {@code grid}, about the grid centre. */
-    public static LinearTrend fit(Grid grid) {
-        GridGeometry g = grid.geometry();
+    /**
+     * Least-squares plane through the non-blank cells of a grid on {@code g} whose row {@code r} starts at
+     * {@code v[r * stride]}, about the grid centre.
+     */
+    public static LinearTrend fit(GridGeometry g, float[] v, int stride) {
         double x0 = (g.west() + g.east()) / 2, y0 = (g.north() + g.south()) / 2;
         double n = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0, sv = 0, sxv = 0, syv = 0;
         for (int r = 0; r < g.rows(); r++) {
             double y = g.y(r) - y0;
             for (int c = 0; c < g.columns(); c++) {
-                float v = grid.get(c, r);
-                if (Float.isNaN(v)) {
+                float z = v[r * stride + c];
+                if (Float.isNaN(z)) {
                     continue;
                 }
                 double x = g.x(c) - x0;
@@ -44,9 +45,9 @@ public record LinearTrend(double a, double bx, double by, double x0, double y0) 
                 sxx += x * x;
                 syy += y * y;
                 sxy += x * y;
-                sv += v;
-                sxv += x * v;
-                syv += y * v;
+                sv += z;
+                sxv += x * z;
+                syv += y * z;
             }
         }
         if (n == 0) {

@@ -72,7 +72,7 @@ final class FilterCommand implements Callable<Integer> {
         FilterSettings settings = new FilterSettings(field, mag, height, order, damping, stabilising, padFactor);
         Grid grid = GeoTiffGrids.read(in);
         TerminalProgress bar = new TerminalProgress(operation.cliName());
-        Grid result = new FilterBank(grid, settings).apply(operation, bar);
+        Grid result = FilterBank.once(grid, settings).apply(operation, bar);
         GeoTiffGrids.write(result, out);
         bar.done();
         System.err.println("wrote " + out + " (" + operation.title() + ", " + operation.unit() + ")");
