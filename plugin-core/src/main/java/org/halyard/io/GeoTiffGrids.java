@@ -30,6 +30,7 @@ import org.geotools.referencing.operation.transform.AffineTransform2D;
 import org.geotools.util.factory.Hints;
 import org.halyard.grid.Grid;
 import org.halyard.grid.GridGeometry;
+import org.halyard.grid.GridRows;
 
 /**
  * Reads and writes {@link Grid}s as single-band float32 GeoTIFFs through GeoTools' gt-geotiff, and converts
@@ -59,15 +60,7 @@ public final class GeoTiffGrids {
      *     geographic CRS, non-square or rotated cells, or a grid with no valid cell
      */
     public static Grid read(Path file) {
-        if (!Files.isRegularFile(file)) {
-            throw new IllegalArgumentException(file + ": no such file");
-        }
-        GeoTiffReader reader;
-        try {
-            reader = new GeoTiffReader(file.toFile(), new Hints(Hints.FORCE_LONGITUDE_FIRST_AXIS_ORDER, Boolean.TRUE));
-        } catch (Exception e) {
-            throw new IllegalArgumentException(file + ": not a readable GeoTIFF (" + firstLine(e) + ")");
-        }
+        GeoTiffReader reader = reader(file);
         try {
             GridCoverage2D coverage;
             try {
@@ -78,16 +71,38 @@ public final class GeoTiffGrids {
             if (coverage == null) {
                 throw new IllegalArgumentException(file + ": not a readable GeoTIFF");
             }
-            Double nodata = null;
-            if (reader.getMetadata() != null && reader.getMetadata().hasNoData()) {
-                nodata = reader.getMetadata().getNoData();
-            }
-            Grid grid = fromCoverage(coverage, nodata, file.toString());
+            Grid grid = fromCoverage(coverage, noData(reader), file.toString());
             coverage.dispose(true);
             return grid;
         } finally {
             reader.dispose();
         }
+    }
+
+    /**
+     * Opens band 1 of a GeoTIFF for a single read of its values into an array the reader lays out, such as
+     * a transform's padded rows: the header is read and checked now (as {@link #read} checks it), the
+     * values when {@link GridRows#copyRows} is called. A single float32 band is read straight into place.
+     *
+     * @throws IllegalArgumentException as {@link #read}
+     */
+    public static GridRows open(Path file) {
+        return GeoTiffRows.open(file);
+    }
+
+    static GeoTiffReader reader(Path file) {
+        if (!Files.isRegularFile(file)) {
+            throw new IllegalArgumentException(file + ": no such file");
+        }
+        try {
+            return new GeoTiffReader(file.toFile(), new Hints(Hints.FORCE_LONGITUDE_FIRST_AXIS_ORDER, Boolean.TRUE));
+        } catch (Exception e) {
+            throw new IllegalArgumentException(file + ": not a readable GeoTIFF (" + firstLine(e) + ")");
+        }
+    }
+
+    static Double noData(GeoTiffReader reader) {
+        return reader.getMetadata() != null && reader.getMetadata().hasNoData() ? reader.getMetadata().getNoData() : null;
     }
 
     /**
@@ -97,7 +112,46 @@ public final class GeoTiffGrids {
      * @param label  what to name in error messages (a file name or layer name)
      */
     public static Grid fromCoverage(GridCoverage2D coverage, Double nodata, String label) {
-        CoordinateReferenceSystem crs = coverage.getCoordinateReferenceSystem2D();
+        RenderedImage img = coverage.getRenderedImage();
+        GridGeometry geometry = geometryOf(coverage.getCoordinateReferenceSystem2D(), coverage.getGridGeometry().getGridToCRS2D(
+                org.geotools.api.metadata.spatial.PixelOrientation.UPPER_LEFT), img.getWidth(), img.getHeight(), label);
+        float[] values = band0(img);
+        if (blankNoData(values, 0, values.length, nodata) == 0) {
+            throw allBlank(label);
+        }
+        return Grid.wrap(geometry, values);
+    }
+
+    /**
+     * Turns {@code nodata} and infinite values in {@code v[from, to)} into {@code NaN}.
+     *
+     * @return the number of valid cells in the range
+     */
+    static int blankNoData(float[] v, int from, int to, Double nodata) {
+        int valid = 0;
+        for (int i = from; i < to; i++) {
+            float x = v[i];
+            if (Float.isInfinite(x) || (nodata != null && (x == nodata.floatValue() || (nodata.isNaN() && Float.isNaN(x))))) {
+                v[i] = Float.NaN;
+            } else if (!Float.isNaN(x)) {
+                valid++;
+            }
+        }
+        return valid;
+    }
+
+    static IllegalArgumentException allBlank(String label) {
+        return new IllegalArgumentException(label + ": every cell of the grid is blank");
+    }
+
+    /**
+     * The grid geometry of a {@code cols x rows} raster with the given CRS and grid-to-world transform (cell
+     * corner), after the checks every Halyard grid must pass.
+     *
+     * @throws IllegalArgumentException naming {@code label} for a missing, geographic or unsupported CRS,
+     *     or for rotated, flipped or non-square cells
+     */
+    static GridGeometry geometryOf(CoordinateReferenceSystem crs, MathTransform g2w, int cols, int rows, String label) {
         if (crs == null || crs instanceof org.geotools.api.referencing.crs.EngineeringCRS
                 || crs.getCoordinateSystem() == null || crs.getName() == null
                 || "Unknown".equalsIgnoreCase(crs.getName().getCode())) {
@@ -110,8 +164,6 @@ public final class GeoTiffGrids {
         if (!(crs instanceof ProjectedCRS)) {
             throw new IllegalArgumentException(label + ": the grid's CRS is not a projected CRS in metres");
         }
-        MathTransform g2w = coverage.getGridGeometry().getGridToCRS2D(
-                org.geotools.api.metadata.spatial.PixelOrientation.UPPER_LEFT);
         if (!(g2w instanceof AffineTransform2D a)) {
             throw new IllegalArgumentException(label + ": the grid's geotransform is not affine");
         }
@@ -127,23 +179,7 @@ public final class GeoTiffGrids {
             throw new IllegalArgumentException(label + ": cells are not square (" + sx + " x " + (-sy)
                     + " m); resample to square cells first");
         }
-        RenderedImage img = coverage.getRenderedImage();
-        int cols = img.getWidth(), rows = img.getHeight();
-        float[] values = band0(img);
-        int valid = 0;
-        for (int i = 0; i < values.length; i++) {
-            float v = values[i];
-            if (Float.isInfinite(v) || (nodata != null && (v == nodata.floatValue() || (nodata.isNaN() && Float.isNaN(v))))) {
-                values[i] = Float.NaN;
-            } else if (!Float.isNaN(v)) {
-                valid++;
-            }
-        }
-        if (valid == 0) {
-            throw new IllegalArgumentException(label + ": every cell of the grid is blank");
-        }
-        GridGeometry geometry = new GridGeometry(cols, rows, a.getTranslateX(), a.getTranslateY(), sx, codeOf(crs));
-        return Grid.wrap(geometry, values);
+        return new GridGeometry(cols, rows, a.getTranslateX(), a.getTranslateY(), sx, codeOf(crs));
     }
 
     /**
@@ -153,7 +189,9 @@ public final class GeoTiffGrids {
      * @throws IllegalArgumentException when the grid has no CRS code or the code is unknown
      */
     public static void write(Grid grid, Path file) {
-        GridCoverage2D coverage = toCoverage(grid, file.getFileName().toString().replaceFirst("\\.tiff?$", ""));
+        // The writer pulls the pixels strip by strip from a view of the grid: no second grid-sized array.
+        GridCoverage2D coverage = coverage(grid, file.getFileName().toString().replaceFirst("\\.tiff?$", ""),
+                new GridImage(grid, NODATA));
         Path tmp = file.resolveSibling("." + file.getFileName() + ".part");
         try {
             if (file.getParent() != null) {
@@ -180,33 +218,35 @@ public final class GeoTiffGrids {
     /** Converts a grid to a coverage with {@link #NODATA} in place of blanks and the nodata property set. */
     public static GridCoverage2D toCoverage(Grid grid, String name) {
         GridGeometry g = grid.geometry();
-        CoordinateReferenceSystem crs = decode(g.crsCode());
+        decode(g.crsCode()); // an unknown code fails before the copy
         float[] v = grid.toArray();
         for (int i = 0; i < v.length; i++) {
             if (Float.isNaN(v[i])) {
                 v[i] = NODATA;
             }
         }
-        // A plain pixel-interleaved raster over our own array: no copy, and the TIFF writer's fast path.
+        // A plain pixel-interleaved raster over our own array, as most consumers expect.
         WritableRaster raster = Raster.createWritableRaster(new java.awt.image.PixelInterleavedSampleModel(
                 DataBuffer.TYPE_FLOAT, g.columns(), g.rows(), 1, g.columns(), new int[] {0}),
                 new java.awt.image.DataBufferFloat(v, v.length), null);
+        return coverage(grid, name, new SharedRasterImage(GridImage.floatGray(), raster));
+    }
+
+    private static GridCoverage2D coverage(Grid grid, String name, RenderedImage image) {
+        GridGeometry g = grid.geometry();
+        CoordinateReferenceSystem crs = decode(g.crsCode());
         ReferencedEnvelope env = new ReferencedEnvelope(g.west(), g.east(), g.south(), g.north(), crs);
         Map<String, Object> props = new HashMap<>();
         CoverageUtilities.setNoDataProperty(props, new NoDataContainer(NODATA));
         GridCoverageFactory factory = new GridCoverageFactory();
-        java.awt.image.ColorModel cm = new java.awt.image.ComponentColorModel(
-                java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_GRAY), false, false,
-                java.awt.Transparency.OPAQUE, DataBuffer.TYPE_FLOAT);
-        java.awt.image.BufferedImage image = new SharedRasterImage(cm, raster);
         return factory.create(name, image, env, (GridSampleDimension[]) null, null, props);
     }
 
     /**
-     * An image whose {@code getData} hands out views of its raster instead of copies. The TIFF writer asks
-     * for every tile through {@code getData(Rectangle)}, and {@code BufferedImage} copies it pixel by pixel
-     * through the generic sample-model path (a fifth of a 4096 x 4096 filter's time, JFR profile); the
-     * writer only reads the tile, so a view is enough. {@code getData} returns a read-only {@code Raster}
+     * An image whose {@code getData} hands out views of its raster instead of copies. Consumers such as the
+     * TIFF writer ask for every tile through {@code getData(Rectangle)}, and {@code BufferedImage} copies it
+     * pixel by pixel through the generic sample-model path (a fifth of a 4096 x 4096 filter's time, JFR
+     * profile); they only read the tile, so a view is enough. {@code getData} returns a read-only {@code Raster}
      * type; coverages are immutable values to their readers.
      */
     private static final class SharedRasterImage extends java.awt.image.BufferedImage {
@@ -301,7 +341,7 @@ public final class GeoTiffGrids {
         return out;
     }
 
-    private static String firstLine(Exception e) {
+    static String firstLine(Exception e) {
         String m = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
         int nl = m.indexOf('\n');
         return nl < 0 ? m : m.substring(0, nl);

@@ -3,6 +3,7 @@ package org.halyard.cli;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.halyard.grid.Grid;
+import org.halyard.grid.GridRows;
 import org.halyard.io.GeoTiffGrids;
 import org.halyard.model.FieldDirection;
 import org.halyard.spectral.FilterBank;
@@ -70,7 +71,8 @@ final class FilterCommand implements Callable<Integer> {
             throw new IllegalArgumentException("reduce-to-pole needs --inclination and --declination (degrees)");
         }
         FilterSettings settings = new FilterSettings(field, mag, height, order, damping, stabilising, padFactor);
-        Grid grid = GeoTiffGrids.read(in);
+        // The file's values are read straight into the transform's rows, and the filter works in that array.
+        GridRows grid = GeoTiffGrids.open(in);
         TerminalProgress bar = new TerminalProgress(operation.cliName());
         Grid result = FilterBank.once(grid, settings).apply(operation, bar);
         GeoTiffGrids.write(result, out);
