@@ -11,6 +11,7 @@ import java.nio.file.Path;
 import java.util.List;
 import org.halyard.grid.Grid;
 import org.halyard.grid.GridGeometry;
+import org.halyard.grid.GridRows;
 import org.halyard.testing.ExternalTools;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
@@ -38,6 +39,45 @@ class GeoTiffGridsTest {
         assertThat(back.geometry()).isEqualTo(grid.geometry());
         assertThat(back.toArray()).containsExactly(grid.toArray());
         assertThat(Files.list(dir).map(p -> p.getFileName().toString())).containsExactly("a.tif");
+    }
+
+    @Test
+    void openReadsTheValuesStraightIntoStridedRowsOnce() throws IOException {
+        Grid grid = sample();
+        Path f = dir.resolve("s.tif");
+        GeoTiffGrids.write(grid, f);
+        GridRows rows = GeoTiffGrids.open(f);
+        assertThat(rows.geometry()).isEqualTo(grid.geometry());
+        int w = grid.columns(), stride = w + 4;
+        float[] dst = new float[grid.rows() * stride];
+        java.util.Arrays.fill(dst, 7f);
+        rows.copyRows(dst, stride);
+        for (int r = 0; r < grid.rows(); r++) {
+            for (int c = 0; c < stride; c++) {
+                // data cells as written (blank stays NaN); the caller's pad cells untouched
+                assertThat(Float.valueOf(dst[r * stride + c])).isEqualTo(Float.valueOf(c < w ? grid.get(c, r) : 7f));
+            }
+        }
+        assertThatThrownBy(() -> rows.copyRows(dst, stride)).isInstanceOf(IllegalStateException.class);
+    }
+
+    @Test
+    @Tag("external")
+    void openReadsOtherSampleTypesThroughTheCoverage() throws IOException {
+        ExternalTools.require("gdal_translate");
+        Path asc = dir.resolve("i.asc");
+        Files.writeString(asc, "ncols 3\nnrows 2\nxllcorner 400000\nyllcorner 6000000\ncellsize 2\n"
+                + "NODATA_value -9999\n1 2 3\n4 -9999 6\n");
+        for (String type : List.of("Int16", "Float64")) {
+            Path tif = dir.resolve(type + ".tif");
+            ExternalTools.run(List.of("gdal_translate", "-q", "-a_srs", "EPSG:32630", "-ot", type,
+                    asc.toString(), tif.toString()), null).orFail();
+            GridRows rows = GeoTiffGrids.open(tif);
+            float[] dst = new float[2 * 5];
+            rows.copyRows(dst, 5);
+            // the ASCII grid's values, row 0 north; GDAL carries the nodata value into the TIFF
+            assertThat(dst).as(type).containsExactly(1, 2, 3, 0, 0, 4, Float.NaN, 6, 0, 0);
+        }
     }
 
     @Test
@@ -96,14 +136,17 @@ class GeoTiffGridsTest {
         Path deg = dir.resolve("deg.tif");
         ExternalTools.run(List.of("gdal_translate", "-q", "-a_srs", "EPSG:4326", asc.toString(), deg.toString()), null).orFail();
         assertThatThrownBy(() -> GeoTiffGrids.read(deg)).hasMessageContaining("geographic CRS");
+        assertThatThrownBy(() -> GeoTiffGrids.open(deg)).hasMessageContaining("geographic CRS");
         Path nocrs = dir.resolve("nocrs.tif");
         ExternalTools.run(List.of("gdal_translate", "-q", asc.toString(), nocrs.toString()), null).orFail();
         assertThatThrownBy(() -> GeoTiffGrids.read(nocrs)).hasMessageContaining("coordinate reference system");
+        assertThatThrownBy(() -> GeoTiffGrids.open(nocrs)).hasMessageContaining("coordinate reference system");
         Files.writeString(asc, "ncols 2\nnrows 1\nxllcorner 400000\nyllcorner 6000000\ncellsize 1\n"
                 + "NODATA_value -9999\n-9999 -9999\n");
         Path blank = dir.resolve("blank.tif");
         ExternalTools.run(List.of("gdal_translate", "-q", "-a_srs", "EPSG:32631", asc.toString(), blank.toString()), null).orFail();
         assertThatThrownBy(() -> GeoTiffGrids.read(blank)).hasMessageContaining("blank");
+        assertThatThrownBy(() -> GeoTiffGrids.open(blank).copyRows(new float[2], 2)).hasMessageContaining("blank");
     }
 
     @Test
@@ -112,5 +155,7 @@ class GeoTiffGridsTest {
         Path txt = dir.resolve("x.tif");
         Files.writeString(txt, "this is not a tiff");
         assertThatThrownBy(() -> GeoTiffGrids.read(txt)).hasMessageContaining("not a readable GeoTIFF");
+        assertThatThrownBy(() -> GeoTiffGrids.open(dir.resolve("none.tif"))).hasMessageContaining("no such file");
+        assertThatThrownBy(() -> GeoTiffGrids.open(txt)).hasMessageContaining("not a readable GeoTIFF");
     }
 }
