@@ -189,20 +189,27 @@ public final class GeoTiffGrids {
      * @throws IllegalArgumentException when the grid has no CRS code or the code is unknown
      */
     public static void write(Grid grid, Path file) {
-        // The writer pulls the pixels strip by strip from a view of the grid: no second grid-sized array.
-        GridCoverage2D coverage = coverage(grid, file.getFileName().toString().replaceFirst("\\.tiff?$", ""),
-                new GridImage(grid, NODATA));
+        String code = grid.geometry().crsCode();
+        CoordinateReferenceSystem crs = decode(code);
+        java.util.regex.Matcher epsg = java.util.regex.Pattern.compile("EPSG:(\\d{4,5})").matcher(code.trim());
+        boolean plain = crs instanceof ProjectedCRS && epsg.matches() && Integer.parseInt(epsg.group(1)) < 32767;
         Path tmp = file.resolveSibling("." + file.getFileName() + ".part");
         try {
             if (file.getParent() != null) {
                 Files.createDirectories(file.getParent());
             }
-            GeoTiffWriter writer = new GeoTiffWriter(tmp.toFile());
-            try {
-                writer.write(coverage, null);
-            } finally {
-                writer.dispose();
-                coverage.dispose(true);
+            if (plain) {
+                // Every grid Halyard makes: written strip by strip, no copy of the grid (FloatGeoTiffWriter).
+                FloatGeoTiffWriter.write(grid, Integer.parseInt(epsg.group(1)), NODATA, tmp);
+            } else {
+                GridCoverage2D coverage = toCoverage(grid, file.getFileName().toString().replaceFirst("\\.tiff?$", ""));
+                GeoTiffWriter writer = new GeoTiffWriter(tmp.toFile());
+                try {
+                    writer.write(coverage, null);
+                } finally {
+                    writer.dispose();
+                    coverage.dispose(true);
+                }
             }
             Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         } catch (IOException e) {
@@ -218,7 +225,7 @@ public final class GeoTiffGrids {
     /** Converts a grid to a coverage with {@link #NODATA} in place of blanks and the nodata property set. */
     public static GridCoverage2D toCoverage(Grid grid, String name) {
         GridGeometry g = grid.geometry();
-        decode(g.crsCode()); // an unknown code fails before the copy
+        CoordinateReferenceSystem crs = decode(g.crsCode());
         float[] v = grid.toArray();
         for (int i = 0; i < v.length; i++) {
             if (Float.isNaN(v[i])) {
@@ -229,12 +236,10 @@ public final class GeoTiffGrids {
         WritableRaster raster = Raster.createWritableRaster(new java.awt.image.PixelInterleavedSampleModel(
                 DataBuffer.TYPE_FLOAT, g.columns(), g.rows(), 1, g.columns(), new int[] {0}),
                 new java.awt.image.DataBufferFloat(v, v.length), null);
-        return coverage(grid, name, new SharedRasterImage(GridImage.floatGray(), raster));
-    }
-
-    private static GridCoverage2D coverage(Grid grid, String name, RenderedImage image) {
-        GridGeometry g = grid.geometry();
-        CoordinateReferenceSystem crs = decode(g.crsCode());
+        java.awt.image.ColorModel cm = new java.awt.image.ComponentColorModel(
+                java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_GRAY), false, false,
+                java.awt.Transparency.OPAQUE, DataBuffer.TYPE_FLOAT);
+        java.awt.image.BufferedImage image = new SharedRasterImage(cm, raster);
         ReferencedEnvelope env = new ReferencedEnvelope(g.west(), g.east(), g.south(), g.north(), crs);
         Map<String, Object> props = new HashMap<>();
         CoverageUtilities.setNoDataProperty(props, new NoDataContainer(NODATA));

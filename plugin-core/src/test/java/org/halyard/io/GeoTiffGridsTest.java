@@ -110,6 +110,30 @@ class GeoTiffGridsTest {
 
     @Test
     @Tag("external")
+    void gdalReadsEveryCellOfAManyStripGridAsWritten() throws IOException {
+        ExternalTools.require("gdal_translate");
+        // 301 columns: 54 rows a 64 KiB strip, so 97 rows end in a part strip; blanks on a diagonal
+        GridGeometry g = new GridGeometry(301, 97, 612345.5, 4987654.25, 1.5, "EPSG:32629");
+        float[] v = Grid.sample(g, (x, y) -> Math.sin(x / 7) * 40 + (y - 4987600) * 0.01).toArray();
+        for (int r = 0; r < g.rows(); r++) {
+            v[g.index(r * 3, r)] = Float.NaN;
+        }
+        Path f = dir.resolve("m.tif"), raw = dir.resolve("m.f32");
+        GeoTiffGrids.write(Grid.of(g, v), f);
+        // Reference: GDAL's decoding of the file, dumped as raw little-endian float32 (ENVI).
+        String err = ExternalTools.run(List.of("gdal_translate", "-q", "-of", "ENVI", f.toString(), raw.toString()), null).orFail();
+        java.nio.ByteBuffer b = java.nio.ByteBuffer.wrap(Files.readAllBytes(raw)).order(java.nio.ByteOrder.LITTLE_ENDIAN);
+        assertThat(b.remaining()).isEqualTo(4 * g.size());
+        for (int i = 0; i < g.size(); i++) {
+            float got = b.getFloat();
+            assertThat(Float.valueOf(got)).as("cell " + i).isEqualTo(Float.isNaN(v[i]) ? GeoTiffGrids.NODATA : v[i]);
+        }
+        assertThat(err).doesNotContainIgnoringCase("warning");
+        assertThat(GeoTiffGrids.read(f).toArray()).containsExactly(v);
+    }
+
+    @Test
+    @Tag("external")
     void readsGridWrittenByGdal() throws IOException {
         ExternalTools.require("gdal_translate");
         Path asc = dir.resolve("g.asc");
