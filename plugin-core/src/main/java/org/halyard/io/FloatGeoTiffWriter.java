@@ -21,7 +21,7 @@ import org.halyard.grid.GridGeometry;
  * a copy of the grid, and runs at the speed of the disk.
  *
  * <p>Why not GeoTools' writer: it converts float samples one at a time through the generic raster path,
- * most of a second for a 4096 x 4096 grid. It remains the writer for anything this one does not cover.
+ * most of a second for a 4096 x 4096 grid.
  */
 final class FloatGeoTiffWriter {
 

@@ -13,6 +13,9 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.HashMap;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.ConcurrentHashMap;
 import org.geotools.api.referencing.FactoryException;
 import org.geotools.api.referencing.crs.CoordinateReferenceSystem;
 import org.geotools.api.referencing.crs.GeographicCRS;
@@ -23,7 +26,6 @@ import org.geotools.coverage.grid.GridCoverage2D;
 import org.geotools.coverage.grid.GridCoverageFactory;
 import org.geotools.coverage.util.CoverageUtilities;
 import org.geotools.gce.geotiff.GeoTiffReader;
-import org.geotools.gce.geotiff.GeoTiffWriter;
 import org.geotools.geometry.jts.ReferencedEnvelope;
 import org.geotools.referencing.CRS;
 import org.geotools.referencing.operation.transform.AffineTransform2D;
@@ -81,8 +83,10 @@ public final class GeoTiffGrids {
 
     /**
      * Opens band 1 of a GeoTIFF for a single read of its values into an array the reader lays out, such as
-     * a transform's padded rows: the header is read and checked now (as {@link #read} checks it), the
-     * values when {@link GridRows#copyRows} is called. A single float32 band is read straight into place.
+     * a transform's padded rows: the header is read and checked now, the values when
+     * {@link GridRows#copyRows} is called. A single float32 band is read straight into place. In the common
+     * case of an EPSG-coded projected CRS the header is taken from the GeoTIFF keys and the CRS is decoded
+     * in the background: an unknown code then fails when the grid is written ({@link #write}).
      *
      * @throws IllegalArgumentException as {@link #read}
      */
@@ -167,6 +171,16 @@ public final class GeoTiffGrids {
         if (!(g2w instanceof AffineTransform2D a)) {
             throw new IllegalArgumentException(label + ": the grid's geotransform is not affine");
         }
+        return geometryOf(a, cols, rows, codeOf(crs), label);
+    }
+
+    /**
+     * The grid geometry of a {@code cols x rows} raster with grid-to-world transform {@code a} (cell corner)
+     * in the CRS {@code code}, after the shape checks.
+     *
+     * @throws IllegalArgumentException naming {@code label} for rotated, flipped or non-square cells
+     */
+    static GridGeometry geometryOf(AffineTransform2D a, int cols, int rows, String code, String label) {
         double sx = a.getScaleX(), sy = a.getScaleY();
         if (Math.abs(a.getShearX()) > SHAPE_TOLERANCE * Math.abs(sx) || Math.abs(a.getShearY()) > SHAPE_TOLERANCE * Math.abs(sx)) {
             throw new IllegalArgumentException(label + ": the grid is rotated; resample it north-up first");
@@ -179,38 +193,25 @@ public final class GeoTiffGrids {
             throw new IllegalArgumentException(label + ": cells are not square (" + sx + " x " + (-sy)
                     + " m); resample to square cells first");
         }
-        return new GridGeometry(cols, rows, a.getTranslateX(), a.getTranslateY(), sx, codeOf(crs));
+        return new GridGeometry(cols, rows, a.getTranslateX(), a.getTranslateY(), sx, code);
     }
 
     /**
-     * Writes a grid as a float32 GeoTIFF. The file is written beside the target under a temporary name and
-     * moved into place, so a failed write leaves no partial file.
+     * Writes a grid as a float32 GeoTIFF ({@link FloatGeoTiffWriter}: strip by strip, no copy of the grid).
+     * The file is written beside the target under a temporary name and moved into place, so a failed write
+     * leaves no partial file.
      *
-     * @throws IllegalArgumentException when the grid has no CRS code or the code is unknown
+     * @throws IllegalArgumentException when the grid has no CRS code, or the code is unknown or not an EPSG
+     *     projected CRS
      */
     public static void write(Grid grid, Path file) {
-        String code = grid.geometry().crsCode();
-        CoordinateReferenceSystem crs = decode(code);
-        java.util.regex.Matcher epsg = java.util.regex.Pattern.compile("EPSG:(\\d{4,5})").matcher(code.trim());
-        boolean plain = crs instanceof ProjectedCRS && epsg.matches() && Integer.parseInt(epsg.group(1)) < 32767;
+        int epsg = projectedEpsg(grid.geometry().crsCode());
         Path tmp = file.resolveSibling("." + file.getFileName() + ".part");
         try {
             if (file.getParent() != null) {
                 Files.createDirectories(file.getParent());
             }
-            if (plain) {
-                // Every grid Halyard makes: written strip by strip, no copy of the grid (FloatGeoTiffWriter).
-                FloatGeoTiffWriter.write(grid, Integer.parseInt(epsg.group(1)), NODATA, tmp);
-            } else {
-                GridCoverage2D coverage = toCoverage(grid, file.getFileName().toString().replaceFirst("\\.tiff?$", ""));
-                GeoTiffWriter writer = new GeoTiffWriter(tmp.toFile());
-                try {
-                    writer.write(coverage, null);
-                } finally {
-                    writer.dispose();
-                    coverage.dispose(true);
-                }
-            }
+            FloatGeoTiffWriter.write(grid, epsg, NODATA, tmp);
             Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         } catch (IOException e) {
             try {
@@ -220,6 +221,21 @@ public final class GeoTiffGrids {
             }
             throw new UncheckedIOException(file + ": cannot write GeoTIFF: " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * The EPSG number of {@code code}, which must name a projected CRS.
+     *
+     * @throws IllegalArgumentException for a missing or unknown code, or one that is not an EPSG projected CRS
+     */
+    static int projectedEpsg(String code) {
+        CoordinateReferenceSystem crs = decode(code);
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("EPSG:(\\d{1,5})").matcher(code.trim());
+        if (!(crs instanceof ProjectedCRS) || !m.matches() || Integer.parseInt(m.group(1)) >= 32767) {
+            throw new IllegalArgumentException("the grid's CRS " + code + " is not an EPSG-coded projected CRS; "
+                    + "Halyard grids are in projected CRSs in metres");
+        }
+        return Integer.parseInt(m.group(1));
     }
 
     /** Converts a grid to a coverage with {@link #NODATA} in place of blanks and the nodata property set. */
@@ -281,6 +297,42 @@ public final class GeoTiffGrids {
         if (code == null || code.isBlank()) {
             throw new IllegalArgumentException("the grid has no CRS code; give one, e.g. --crs EPSG:32631");
         }
+        CompletableFuture<CoordinateReferenceSystem> ahead = PREFETCHED.get(code);
+        if (ahead != null) {
+            try {
+                return ahead.join();
+            } catch (CompletionException e) {
+                throw e.getCause() instanceof RuntimeException r ? r : e;
+            }
+        }
+        return decodeNow(code);
+    }
+
+    /**
+     * Starts decoding {@code code} on a background thread, so that a later {@link #decode} of it finds the
+     * CRS made: opening the EPSG database costs about half a second, which can pass while pixels are read
+     * and transformed.
+     */
+    static void prefetch(String code) {
+        PREFETCHED.computeIfAbsent(code, c -> {
+            CompletableFuture<CoordinateReferenceSystem> f = new CompletableFuture<>();
+            // Its own daemon thread: the common pool's one worker on two cores is the transforms' second thread.
+            Thread t = new Thread(() -> {
+                try {
+                    f.complete(decodeNow(c));
+                } catch (RuntimeException e) {
+                    f.completeExceptionally(e);
+                }
+            }, "halyard-crs-" + c);
+            t.setDaemon(true);
+            t.start();
+            return f;
+        });
+    }
+
+    private static final Map<String, CompletableFuture<CoordinateReferenceSystem>> PREFETCHED = new ConcurrentHashMap<>();
+
+    private static CoordinateReferenceSystem decodeNow(String code) {
         try {
             return CRS.decode(code.trim(), true);
         } catch (FactoryException e) {

@@ -8,12 +8,17 @@ import java.awt.image.PixelInterleavedSampleModel;
 import java.awt.image.Raster;
 import java.awt.image.SampleModel;
 import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import javax.imageio.ImageReadParam;
 import javax.imageio.ImageReader;
 import javax.imageio.ImageIO;
 import javax.imageio.stream.ImageInputStream;
 import org.geotools.api.referencing.datum.PixelInCell;
+import org.geotools.coverage.grid.io.imageio.geotiff.GeoTiffConstants;
+import org.geotools.coverage.grid.io.imageio.geotiff.GeoTiffIIOMetadataDecoder;
+import org.geotools.coverage.grid.io.imageio.geotiff.TiePoint;
+import org.geotools.referencing.operation.transform.AffineTransform2D;
 import org.geotools.gce.geotiff.GeoTiffReader;
 import org.geotools.util.factory.Hints;
 import org.halyard.grid.GridGeometry;
@@ -43,6 +48,10 @@ final class GeoTiffRows implements GridRows {
 
     /** Opens {@code file} and checks its header; see {@link GeoTiffGrids#open}. */
     static GeoTiffRows open(Path file) {
+        GeoTiffRows plain = openPlain(file);
+        if (plain != null) {
+            return plain;
+        }
         GeoTiffReader reader = GeoTiffGrids.reader(file);
         try {
             var range = reader.getOriginalGridRange();
@@ -53,6 +62,52 @@ final class GeoTiffRows implements GridRows {
             reader.dispose();
         }
     }
+
+    /**
+     * The header read from the GeoTIFF keys alone, for the common case: a projected CRS given by its EPSG
+     * code, pixel-is-area, metres, one tie point and a pixel scale (GeoTIFF, OGC 19-008r4, sections 7.4 and
+     * 7.5). The CRS itself is decoded on a background thread ({@link GeoTiffGrids#prefetch}); it is needed
+     * only when the result is written, where an unknown code fails. Anything else returns null and takes
+     * the full reader, which builds the CRS from the keys first.
+     */
+    private static GeoTiffRows openPlain(Path file) {
+        if (!Files.isRegularFile(file)) {
+            return null;
+        }
+        ImageReader reader = null;
+        try (ImageInputStream in = ImageIO.createImageInputStream(file.toFile())) {
+            reader = new it.geosolutions.imageioimpl.plugins.tiff.TIFFImageReaderSpi().createReaderInstance();
+            reader.setInput(in);
+            GeoTiffIIOMetadataDecoder keys = new GeoTiffIIOMetadataDecoder(reader.getImageMetadata(0));
+            String model = keys.getGeoKey(GeoTiffConstants.GTModelTypeGeoKey);
+            String raster = keys.getGeoKey(GeoTiffConstants.GTRasterTypeGeoKey);
+            String projected = keys.getGeoKey(PROJECTED_CRS_KEY), units = keys.getGeoKey(LINEAR_UNITS_KEY);
+            if (!"1".equals(model) || !(raster == null || "1".equals(raster)) || projected == null
+                    || !projected.matches("\\d{4,5}") || Integer.parseInt(projected) >= GeoTiffConstants.GTUserDefinedGeoKey
+                    || !(units == null || "9001".equals(units)) || keys.hasModelTrasformation()
+                    || !keys.hasPixelScales() || !keys.hasTiePoints() || keys.getModelTiePoints().length != 1) {
+                return null;
+            }
+            double sx = keys.getModelPixelScales().getScaleX(), sy = keys.getModelPixelScales().getScaleY();
+            TiePoint t = keys.getModelTiePoints()[0];
+            // raster (i, j) -> model (x, y) = (X + (i - I) sx, Y - (j - J) sy), from the cell corner
+            AffineTransform2D g2w = new AffineTransform2D(sx, 0, 0, -sy,
+                    t.getValueAt(3) - t.getValueAt(0) * sx, t.getValueAt(4) + t.getValueAt(1) * sy);
+            String code = "EPSG:" + Integer.parseInt(projected);
+            GridGeometry g = GeoTiffGrids.geometryOf(g2w, reader.getWidth(0), reader.getHeight(0), code, file.toString());
+            GeoTiffGrids.prefetch(code);
+            return new GeoTiffRows(file, g, keys.hasNoData() ? keys.getNoData() : null);
+        } catch (IOException | RuntimeException e) {
+            return null; // the full reader reports what is wrong with the file
+        } finally {
+            if (reader != null) {
+                reader.dispose();
+            }
+        }
+    }
+
+    /** GeoTIFF keys: ProjectedCSTypeGeoKey and ProjLinearUnitsGeoKey (OGC 19-008r4, annex B). */
+    private static final int PROJECTED_CRS_KEY = 3072, LINEAR_UNITS_KEY = 3076;
 
     @Override
     public GridGeometry geometry() {
