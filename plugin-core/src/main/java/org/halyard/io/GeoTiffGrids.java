@@ -13,8 +13,6 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.HashMap;
 import java.util.Map;
-import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.CompletionException;
 import java.util.concurrent.ConcurrentHashMap;
 import org.geotools.api.referencing.FactoryException;
 import org.geotools.api.referencing.crs.CoordinateReferenceSystem;
@@ -85,8 +83,8 @@ public final class GeoTiffGrids {
      * Opens band 1 of a GeoTIFF for a single read of its values into an array the reader lays out, such as
      * a transform's padded rows: the header is read and checked now, the values when
      * {@link GridRows#copyRows} is called. A single float32 band is read straight into place. In the common
-     * case of an EPSG-coded projected CRS the header is taken from the GeoTIFF keys and the CRS is decoded
-     * in the background: an unknown code then fails when the grid is written ({@link #write}).
+     * case of an EPSG-coded projected CRS the header is taken from the GeoTIFF keys without the EPSG
+     * database, which a filtered grid written in the same CRS then does not need either.
      *
      * @throws IllegalArgumentException as {@link #read}
      */
@@ -229,8 +227,11 @@ public final class GeoTiffGrids {
      * @throws IllegalArgumentException for a missing or unknown code, or one that is not an EPSG projected CRS
      */
     static int projectedEpsg(String code) {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("EPSG:(\\d{1,5})").matcher(code == null ? "" : code.trim());
+        if (m.matches() && DECLARED_PROJECTED.contains(code)) {
+            return Integer.parseInt(m.group(1));
+        }
         CoordinateReferenceSystem crs = decode(code);
-        java.util.regex.Matcher m = java.util.regex.Pattern.compile("EPSG:(\\d{1,5})").matcher(code.trim());
         if (!(crs instanceof ProjectedCRS) || !m.matches() || Integer.parseInt(m.group(1)) >= 32767) {
             throw new IllegalArgumentException("the grid's CRS " + code + " is not an EPSG-coded projected CRS; "
                     + "Halyard grids are in projected CRSs in metres");
@@ -297,48 +298,24 @@ public final class GeoTiffGrids {
         if (code == null || code.isBlank()) {
             throw new IllegalArgumentException("the grid has no CRS code; give one, e.g. --crs EPSG:32631");
         }
-        CompletableFuture<CoordinateReferenceSystem> ahead = PREFETCHED.get(code);
-        if (ahead != null) {
-            try {
-                return ahead.join();
-            } catch (CompletionException e) {
-                throw e.getCause() instanceof RuntimeException r ? r : e;
-            }
-        }
-        return decodeNow(code);
-    }
-
-    /**
-     * Starts decoding {@code code} on a background thread, so that a later {@link #decode} of it finds the
-     * CRS made: opening the EPSG database costs about half a second, which can pass while pixels are read
-     * and transformed.
-     */
-    static void prefetch(String code) {
-        PREFETCHED.computeIfAbsent(code, c -> {
-            CompletableFuture<CoordinateReferenceSystem> f = new CompletableFuture<>();
-            // Its own daemon thread: the common pool's one worker on two cores is the transforms' second thread.
-            Thread t = new Thread(() -> {
-                try {
-                    f.complete(decodeNow(c));
-                } catch (RuntimeException e) {
-                    f.completeExceptionally(e);
-                }
-            }, "halyard-crs-" + c);
-            t.setDaemon(true);
-            t.start();
-            return f;
-        });
-    }
-
-    private static final Map<String, CompletableFuture<CoordinateReferenceSystem>> PREFETCHED = new ConcurrentHashMap<>();
-
-    private static CoordinateReferenceSystem decodeNow(String code) {
         try {
             return CRS.decode(code.trim(), true);
         } catch (FactoryException e) {
             throw new IllegalArgumentException("unknown CRS code '" + code + "' (expected e.g. EPSG:32631)");
         }
     }
+
+    /**
+     * Records that a GeoTIFF's own keys declare {@code code} a projected CRS (GTModelTypeGeoKey projected,
+     * ProjectedCSTypeGeoKey the EPSG code: GeoTIFF, OGC 19-008r4, section 7.5), so that writing a grid in it
+     * needs no look-up in the EPSG database, which costs about half a second of CPU to open. The code
+     * written is the code read, so the output claims no more than its input did.
+     */
+    static void declaredProjected(String code) {
+        DECLARED_PROJECTED.add(code);
+    }
+
+    private static final java.util.Set<String> DECLARED_PROJECTED = ConcurrentHashMap.newKeySet();
 
     /** The authority code of a CRS, {@code EPSG:n} where one is found, else its WKT name. */
     public static String codeOf(CoordinateReferenceSystem crs) {

@@ -66,9 +66,8 @@ final class GeoTiffRows implements GridRows {
     /**
      * The header read from the GeoTIFF keys alone, for the common case: a projected CRS given by its EPSG
      * code, pixel-is-area, metres, one tie point and a pixel scale (GeoTIFF, OGC 19-008r4, sections 7.4 and
-     * 7.5). The CRS itself is decoded on a background thread ({@link GeoTiffGrids#prefetch}); it is needed
-     * only when the result is written, where an unknown code fails. Anything else returns null and takes
-     * the full reader, which builds the CRS from the keys first.
+     * 7.5), taken as the keys state it ({@link GeoTiffGrids#declaredProjected}). Anything else returns
+     * null and takes the full reader, which builds the CRS from the keys first.
      */
     private static GeoTiffRows openPlain(Path file) {
         if (!Files.isRegularFile(file)) {
@@ -95,7 +94,7 @@ final class GeoTiffRows implements GridRows {
                     t.getValueAt(3) - t.getValueAt(0) * sx, t.getValueAt(4) + t.getValueAt(1) * sy);
             String code = "EPSG:" + Integer.parseInt(projected);
             GridGeometry g = GeoTiffGrids.geometryOf(g2w, reader.getWidth(0), reader.getHeight(0), code, file.toString());
-            GeoTiffGrids.prefetch(code);
+            GeoTiffGrids.declaredProjected(code);
             return new GeoTiffRows(file, g, keys.hasNoData() ? keys.getNoData() : null);
         } catch (IOException | RuntimeException e) {
             return null; // the full reader reports what is wrong with the file
