@@ -145,6 +145,8 @@ class GeoTiffGridsTest {
         Grid g = GeoTiffGrids.read(tif);
         // ESRI ASCII grid: first data row is the north row, xllcorner/yllcorner the outer lower-left corner.
         assertThat(g.geometry()).isEqualTo(new GridGeometry(3, 2, 400000, 6000004, 2, "EPSG:32630"));
+        // the header from the GeoTIFF keys alone (open) agrees with the one GeoTools builds (read)
+        assertThat(GeoTiffGrids.open(tif).geometry()).isEqualTo(g.geometry());
         assertThat(g.get(0, 0)).isEqualTo(1f);
         assertThat(g.get(2, 1)).isEqualTo(6f);
         assertThat(g.get(1, 1)).isNaN();
@@ -171,6 +173,17 @@ class GeoTiffGridsTest {
         ExternalTools.run(List.of("gdal_translate", "-q", "-a_srs", "EPSG:32631", asc.toString(), blank.toString()), null).orFail();
         assertThatThrownBy(() -> GeoTiffGrids.read(blank)).hasMessageContaining("blank");
         assertThatThrownBy(() -> GeoTiffGrids.open(blank).copyRows(new float[2], 2)).hasMessageContaining("blank");
+    }
+
+    @Test
+    void writesOnlyGridsInProjectedCrss() {
+        GridGeometry g = new GridGeometry(2, 2, 2, 51, 0.001, "EPSG:4326");
+        assertThatThrownBy(() -> GeoTiffGrids.write(Grid.filled(g, 1f), dir.resolve("deg.tif")))
+                .hasMessageContaining("not an EPSG-coded projected CRS");
+        GridGeometry unknown = new GridGeometry(2, 2, 0, 0, 1, "EPSG:99999");
+        assertThatThrownBy(() -> GeoTiffGrids.write(Grid.filled(unknown, 1f), dir.resolve("u.tif")))
+                .hasMessageContaining("unknown CRS code");
+        assertThat(dir.toFile().list()).isEmpty();
     }
 
     @Test
