@@ -71,31 +71,79 @@ public final class FilterBank {
                     settings.stabilisingInclinationDeg()), p);
             case UPWARD -> single(Responses.upward(settings.heightM()), p);
             case DOWNWARD -> single(Responses.downward(settings.heightM(), settings.damping()), p);
-            case VERTICAL_DERIVATIVE -> settings.order() == 1 ? tz(p, true) : single(Responses.verticalDerivative(settings.order()), p);
-            case DX -> tx(p, true);
-            case DY -> ty(p, true);
-            case TOTAL_HORIZONTAL_GRADIENT -> Grid.wrap(g, combine(tx(p.slice(0, 50), false), ty(p.slice(50, 100), true), null, Combination.NORM));
-            case ANALYTIC_SIGNAL -> Grid.wrap(g, combine(tx(p.slice(0, 40), false), ty(p.slice(40, 70), false), tz(p.slice(70, 100), true), Combination.NORM));
-            case TILT -> Grid.wrap(g, tilt(p));
-            case TILT_HORIZONTAL_DERIVATIVE -> Grid.wrap(g, HorizontalGradient.centralDifferenceNorm(tilt(p), g));
+            case VERTICAL_DERIVATIVE -> settings.order() == 1 ? tz(p) : single(Responses.verticalDerivative(settings.order()), p);
+            case DX -> tx(p);
+            case DY -> ty(p);
+            case TOTAL_HORIZONTAL_GRADIENT -> Grid.wrap(g, combined(Combination.HORIZONTAL_NORM, p));
+            case ANALYTIC_SIGNAL -> Grid.wrap(g, combined(Combination.NORM, p));
+            case TILT -> Grid.wrap(g, combined(Combination.TILT, p));
+            case TILT_HORIZONTAL_DERIVATIVE -> Grid.wrap(g, HorizontalGradient.centralDifferenceNorm(combined(Combination.TILT, p), g));
         };
     }
 
-    private float[] tilt(Progress p) {
-        return combine(tx(p.slice(0, 40), false), ty(p.slice(40, 70), false), tz(p.slice(70, 100), true), Combination.TILT);
+    /** Maps made of the first derivatives: h2 = Tx^2 + Ty^2 (float), then the map from h2 and Tz. */
+    private enum Combination {
+        HORIZONTAL_NORM, NORM, TILT;
+
+        static float first(float tx) {
+            return (float) ((double) tx * tx);
+        }
+
+        static float add(float h2, float ty) {
+            return (float) (h2 + (double) ty * ty);
+        }
+
+        float finish(float h2, float tz) {
+            return switch (this) {
+                case HORIZONTAL_NORM -> (float) Math.sqrt(h2);
+                case NORM -> (float) Math.sqrt(h2 + (double) tz * tz);
+                case TILT -> (float) Math.toDegrees(Math.atan2(tz, Math.sqrt(h2)));
+            };
+        }
+
+        boolean needsTz() {
+            return this != HORIZONTAL_NORM;
+        }
     }
 
-    private enum Combination { NORM, TILT }
-
-    private static float[] combine(Grid a, Grid b, Grid c, Combination how) {
-        float[] out = new float[a.geometry().size()];
-        for (int i = 0; i < out.length; i++) {
-            double ai = a.get(i), bi = b.get(i), ci = c == null ? 0 : c.get(i);
-            double h2 = ai * ai + bi * bi;
-            out[i] = switch (how) {
-                case NORM -> (float) Math.sqrt(h2 + ci * ci);
-                case TILT -> (float) Math.toDegrees(Math.atan2(ci, Math.sqrt(h2)));
-            };
+    /**
+     * A combined map. A reusable bank keeps Tx, Ty and Tz for the maps that follow; a single-use bank sums
+     * the squares of Tx and Ty row by row as the filters deliver them and lets Tz, the last, consume the
+     * spectrum, so it holds one grid besides the spectrum instead of four. Both do the same arithmetic.
+     */
+    private float[] combined(Combination how, Progress p) {
+        int n = grid.geometry().size();
+        float[] out = new float[n];
+        if (!once) {
+            Grid a = tx(p.slice(0, 40)), b = ty(p.slice(40, 70));
+            Grid c = how.needsTz() ? tz(p.slice(70, 100)) : null;
+            for (int i = 0; i < n; i++) {
+                out[i] = how.finish(Combination.add(Combination.first(a.get(i)), b.get(i)), c == null ? 0 : c.get(i));
+            }
+            return out;
+        }
+        int w = grid.geometry().columns();
+        GridSpectrum s = spectrum(p.slice(0, 25));
+        s.filterRows(Responses.dx(), (r, v, off) -> {
+            for (int c = 0; c < w; c++) {
+                out[r * w + c] = Combination.first(v[off + c]);
+            }
+        }, p.slice(25, 50));
+        if (!how.needsTz()) {
+            Grid b = s.filterConsuming(Responses.dy(), p.slice(50, 100));
+            for (int i = 0; i < n; i++) {
+                out[i] = how.finish(Combination.add(out[i], b.get(i)), 0);
+            }
+            return out;
+        }
+        s.filterRows(Responses.dy(), (r, v, off) -> {
+            for (int c = 0; c < w; c++) {
+                out[r * w + c] = Combination.add(out[r * w + c], v[off + c]);
+            }
+        }, p.slice(50, 75));
+        Grid c = s.filterConsuming(Responses.verticalDerivative(1), p.slice(75, 100));
+        for (int i = 0; i < n; i++) {
+            out[i] = how.finish(out[i], c.get(i));
         }
         return out;
     }
@@ -113,32 +161,32 @@ public final class FilterBank {
         return spectrum;
     }
 
-    // The last transform of a single-use bank consumes the spectrum: its result lives in the spectrum's array.
+    // In a single-use bank a derivative is the only transform back: it consumes the spectrum.
 
-    private Grid tx(Progress p, boolean last) {
+    private Grid tx(Progress p) {
         if (tx == null) {
-            tx = derivative(Responses.dx(), p, last);
+            tx = derivative(Responses.dx(), p);
         }
         return tx;
     }
 
-    private Grid ty(Progress p, boolean last) {
+    private Grid ty(Progress p) {
         if (ty == null) {
-            ty = derivative(Responses.dy(), p, last);
+            ty = derivative(Responses.dy(), p);
         }
         return ty;
     }
 
-    private Grid tz(Progress p, boolean last) {
+    private Grid tz(Progress p) {
         if (tz == null) {
-            tz = derivative(Responses.verticalDerivative(1), p, last);
+            tz = derivative(Responses.verticalDerivative(1), p);
         }
         return tz;
     }
 
-    private Grid derivative(WavenumberResponse r, Progress p, boolean last) {
+    private Grid derivative(WavenumberResponse r, Progress p) {
         GridSpectrum s = spectrum(p.slice(0, 50));
-        return once && last ? s.filterConsuming(r, p.slice(50, 100)) : s.filter(r, p.slice(50, 100));
+        return once ? s.filterConsuming(r, p.slice(50, 100)) : s.filter(r, p.slice(50, 100));
     }
 
     private org.halyard.model.FieldDirection requireField() {

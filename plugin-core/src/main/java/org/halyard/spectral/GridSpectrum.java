@@ -240,6 +240,26 @@ public final class GridSpectrum {
 
     /** As {@link #filter} but the values only, row-major, row 0 north. */
     public float[] filterToArray(WavenumberResponse response, Progress progress) {
+        float[] out = new float[rows * cols];
+        filterRows(response, (r, values, off) -> System.arraycopy(values, off, out, r * cols, cols), progress);
+        return out;
+    }
+
+    /** Receives the rows of a filtered grid, for consumers that reduce them as they come. */
+    @FunctionalInterface
+    public interface RowSink {
+        /**
+         * Row {@code r} (0 north) is {@code values[off .. off + columns)}, blanks {@code NaN}, unit as the
+         * response makes it. Called from several threads, each row once; the array is reused afterwards.
+         */
+        void row(int r, float[] values, int off);
+    }
+
+    /**
+     * As {@link #filter}, handing each row to {@code sink} instead of keeping the grid: a map combined from
+     * several filters (analytic signal, tilt) then needs no grid per filter.
+     */
+    public void filterRows(WavenumberResponse response, RowSink sink, Progress progress) {
         float[] src = requireSpectrum();
         float[] work;
         try {
@@ -248,10 +268,7 @@ public final class GridSpectrum {
             throw new IllegalArgumentException("not enough memory to filter a " + cols + " x " + rows
                     + " grid; raise -Xmx (HALYARD_JAVA_OPTS)");
         }
-        transformBack(response, src, work, Progress.orNone(progress));
-        float[] out = new float[rows * cols];
-        compact(work, out);
-        return out;
+        transformBack(response, src, work, sink, Progress.orNone(progress));
     }
 
     /**
@@ -263,8 +280,10 @@ public final class GridSpectrum {
     public Grid filterConsuming(WavenumberResponse response, Progress progress) {
         float[] s = requireSpectrum();
         rowSpectrum = null;
-        transformBack(response, s, s, Progress.orNone(progress));
-        compact(s, s);
+        transformBack(response, s, s, null, Progress.orNone(progress));
+        for (int r = 0; r < rows; r++) {
+            System.arraycopy(s, r * (nc + 2), s, r * cols, cols); // rows move forward: arraycopy allows the overlap
+        }
         return Grid.wrapLeading(geometry, s);
     }
 
@@ -279,9 +298,9 @@ public final class GridSpectrum {
      * Filters the row transforms in {@code src} into {@code dst} (the same array or another of its size):
      * per block of spectrum columns, the pad rows are made, the columns transformed, multiplied by the
      * response and transformed back; then each data row is transformed back, the plane (as filtered) added
-     * and blanks restored, in the strided layout.
+     * and blanks restored, in the strided layout, and handed to {@code sink} when there is one.
      */
-    private void transformBack(WavenumberResponse response, float[] src, float[] dst, Progress p) {
+    private void transformBack(WavenumberResponse response, float[] src, float[] dst, RowSink sink, Progress p) {
         int stride = nc + 2;
         double dkx = 2 * Math.PI / (nc * geometry.cellSize());
         double dky = 2 * Math.PI / (nr * geometry.cellSize());
@@ -326,15 +345,11 @@ public final class GridSpectrum {
                 dst[off + c] = blank != null && blank[r * cols + c] ? Float.NaN
                         : (float) (dst[off + c] + t.at(geometry.x(c), y));
             }
+            if (sink != null) {
+                sink.row(r, dst, off);
+            }
         });
         p.report(100);
-    }
-
-    /** Moves the data cells of the strided rows in {@code work} to row-major {@code out} (may be {@code work}). */
-    private void compact(float[] work, float[] out) {
-        for (int r = 0; r < rows; r++) {
-            System.arraycopy(work, r * (nc + 2), out, r * cols, cols); // forward overlap is safe in arraycopy
-        }
     }
 
     private static void responseAt(WavenumberResponse response, double kx, double ky, boolean nyqX, boolean nyqY,

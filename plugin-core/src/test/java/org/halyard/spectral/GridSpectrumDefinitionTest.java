@@ -49,12 +49,15 @@ class GridSpectrumDefinitionTest {
         assertThatThrownBy(() -> once.filter(Responses.dx(), Progress.NONE)).isInstanceOf(IllegalStateException.class);
     }
 
-    @Test
-    void singleUseBankRefusesASecondOperation() {
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.EnumSource(value = FilterOperation.class, names = {"REDUCE_TO_POLE"},
+            mode = org.junit.jupiter.params.provider.EnumSource.Mode.EXCLUDE)
+    void singleUseBankGivesTheReusableBanksValuesAndRefusesASecondOperation(FilterOperation op) {
         FilterBank bank = FilterBank.once(field(), FilterSettings.defaults());
-        Grid as = bank.apply(FilterOperation.ANALYTIC_SIGNAL, Progress.NONE);
-        Grid reference = new FilterBank(field(), FilterSettings.defaults()).apply(FilterOperation.ANALYTIC_SIGNAL, Progress.NONE);
-        assertThat(as.toArray()).containsExactly(reference.toArray());
+        Grid once = bank.apply(op, Progress.NONE);
+        FilterBank reusable = new FilterBank(field(), FilterSettings.defaults());
+        reusable.apply(FilterOperation.DX, Progress.NONE); // the reusable bank's caches in use
+        assertThat(once.toArray()).as(op.cliName()).containsExactly(reusable.apply(op, Progress.NONE).toArray());
         assertThatThrownBy(() -> bank.apply(FilterOperation.DX, Progress.NONE)).isInstanceOf(IllegalStateException.class);
     }
 
