@@ -178,7 +178,7 @@ public final class GeoTiffGrids {
      *
      * @throws IllegalArgumentException naming {@code label} for rotated, flipped or non-square cells
      */
-    static GridGeometry geometryOf(AffineTransform2D a, int cols, int rows, String code, String label) {
+    static GridGeometry geometryOf(java.awt.geom.AffineTransform a, int cols, int rows, String code, String label) {
         double sx = a.getScaleX(), sy = a.getScaleY();
         if (Math.abs(a.getShearX()) > SHAPE_TOLERANCE * Math.abs(sx) || Math.abs(a.getShearY()) > SHAPE_TOLERANCE * Math.abs(sx)) {
             throw new IllegalArgumentException(label + ": the grid is rotated; resample it north-up first");

@@ -10,15 +10,15 @@ import java.awt.image.SampleModel;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.Map;
 import javax.imageio.ImageReadParam;
 import javax.imageio.ImageReader;
 import javax.imageio.ImageIO;
 import javax.imageio.stream.ImageInputStream;
+import it.geosolutions.imageio.plugins.tiff.TIFFDirectory;
+import it.geosolutions.imageio.plugins.tiff.TIFFField;
 import org.geotools.api.referencing.datum.PixelInCell;
-import org.geotools.coverage.grid.io.imageio.geotiff.GeoTiffConstants;
-import org.geotools.coverage.grid.io.imageio.geotiff.GeoTiffIIOMetadataDecoder;
-import org.geotools.coverage.grid.io.imageio.geotiff.TiePoint;
-import org.geotools.referencing.operation.transform.AffineTransform2D;
 import org.geotools.gce.geotiff.GeoTiffReader;
 import org.geotools.util.factory.Hints;
 import org.halyard.grid.GridGeometry;
@@ -77,25 +77,29 @@ final class GeoTiffRows implements GridRows {
         try (ImageInputStream in = ImageIO.createImageInputStream(file.toFile())) {
             reader = new it.geosolutions.imageioimpl.plugins.tiff.TIFFImageReaderSpi().createReaderInstance();
             reader.setInput(in);
-            GeoTiffIIOMetadataDecoder keys = new GeoTiffIIOMetadataDecoder(reader.getImageMetadata(0));
-            String model = keys.getGeoKey(GeoTiffConstants.GTModelTypeGeoKey);
-            String raster = keys.getGeoKey(GeoTiffConstants.GTRasterTypeGeoKey);
-            String projected = keys.getGeoKey(PROJECTED_CRS_KEY), units = keys.getGeoKey(LINEAR_UNITS_KEY);
-            if (!"1".equals(model) || !(raster == null || "1".equals(raster)) || projected == null
-                    || !projected.matches("\\d{4,5}") || Integer.parseInt(projected) >= GeoTiffConstants.GTUserDefinedGeoKey
-                    || !(units == null || "9001".equals(units)) || keys.hasModelTrasformation()
-                    || !keys.hasPixelScales() || !keys.hasTiePoints() || keys.getModelTiePoints().length != 1) {
+            // The TIFF directory itself, not GeoTools' key decoder: that one starts JAI's whole operator
+            // registry (a tenth of a second) through GeoTools' logging set-up.
+            TIFFDirectory dir = TIFFDirectory.createFromMetadata(reader.getImageMetadata(0));
+            Map<Integer, Integer> keys = shortGeoKeys(dir.getTIFFField(GEO_KEY_DIRECTORY));
+            TIFFField scale = dir.getTIFFField(MODEL_PIXEL_SCALE), tie = dir.getTIFFField(MODEL_TIEPOINT);
+            Integer projected = keys.get(PROJECTED_CRS_KEY);
+            if (!Integer.valueOf(1).equals(keys.get(MODEL_TYPE_KEY))
+                    || !(keys.get(RASTER_TYPE_KEY) == null || keys.get(RASTER_TYPE_KEY) == 1)
+                    || projected == null || projected < 1024 || projected >= 32767
+                    || !(keys.get(LINEAR_UNITS_KEY) == null || keys.get(LINEAR_UNITS_KEY) == 9001)
+                    || dir.getTIFFField(MODEL_TRANSFORMATION) != null
+                    || scale == null || scale.getCount() < 2 || tie == null || tie.getCount() != 6) {
                 return null;
             }
-            double sx = keys.getModelPixelScales().getScaleX(), sy = keys.getModelPixelScales().getScaleY();
-            TiePoint t = keys.getModelTiePoints()[0];
+            double sx = scale.getAsDouble(0), sy = scale.getAsDouble(1);
             // raster (i, j) -> model (x, y) = (X + (i - I) sx, Y - (j - J) sy), from the cell corner
-            AffineTransform2D g2w = new AffineTransform2D(sx, 0, 0, -sy,
-                    t.getValueAt(3) - t.getValueAt(0) * sx, t.getValueAt(4) + t.getValueAt(1) * sy);
-            String code = "EPSG:" + Integer.parseInt(projected);
+            var g2w = new java.awt.geom.AffineTransform(sx, 0, 0, -sy,
+                    tie.getAsDouble(3) - tie.getAsDouble(0) * sx, tie.getAsDouble(4) + tie.getAsDouble(1) * sy);
+            String code = "EPSG:" + projected;
             GridGeometry g = GeoTiffGrids.geometryOf(g2w, reader.getWidth(0), reader.getHeight(0), code, file.toString());
+            Double nodata = noData(dir.getTIFFField(GDAL_NODATA));
             GeoTiffGrids.declaredProjected(code);
-            return new GeoTiffRows(file, g, keys.hasNoData() ? keys.getNoData() : null);
+            return new GeoTiffRows(file, g, nodata);
         } catch (IOException | RuntimeException e) {
             return null; // the full reader reports what is wrong with the file
         } finally {
@@ -105,8 +109,39 @@ final class GeoTiffRows implements GridRows {
         }
     }
 
-    /** GeoTIFF keys: ProjectedCSTypeGeoKey and ProjLinearUnitsGeoKey (OGC 19-008r4, annex B). */
-    private static final int PROJECTED_CRS_KEY = 3072, LINEAR_UNITS_KEY = 3076;
+    /** TIFF tags of GeoTIFF (OGC 19-008r4, section 7.1) and GDAL's nodata tag. */
+    private static final int MODEL_PIXEL_SCALE = 33550, MODEL_TIEPOINT = 33922, MODEL_TRANSFORMATION = 34264,
+            GEO_KEY_DIRECTORY = 34735, GDAL_NODATA = 42113;
+    /** GeoTIFF keys: model type, raster type, ProjectedCSTypeGeoKey, ProjLinearUnitsGeoKey (annex B). */
+    private static final int MODEL_TYPE_KEY = 1024, RASTER_TYPE_KEY = 1025, PROJECTED_CRS_KEY = 3072, LINEAR_UNITS_KEY = 3076;
+
+    /**
+     * The keys of a GeoKeyDirectoryTag whose value is stored in the directory itself (TIFFTagLocation 0):
+     * after a header of four shorts, entries of {KeyID, TIFFTagLocation, Count, Value}.
+     */
+    private static Map<Integer, Integer> shortGeoKeys(TIFFField directory) {
+        Map<Integer, Integer> keys = new HashMap<>();
+        if (directory == null || directory.getCount() < 4) {
+            return keys;
+        }
+        int n = Math.min(directory.getAsInt(3), (directory.getCount() - 4) / 4);
+        for (int e = 0; e < n; e++) {
+            int at = 4 + 4 * e;
+            if (directory.getAsInt(at + 1) == 0) {
+                keys.put(directory.getAsInt(at), directory.getAsInt(at + 3));
+            }
+        }
+        return keys;
+    }
+
+    /** GDAL's nodata tag as a number (it is ASCII), or null without one. */
+    private static Double noData(TIFFField field) {
+        if (field == null) {
+            return null;
+        }
+        String text = field.getAsString(0).replace("\0", "").trim();
+        return text.equalsIgnoreCase("nan") ? Double.NaN : Double.parseDouble(text);
+    }
 
     @Override
     public GridGeometry geometry() {
