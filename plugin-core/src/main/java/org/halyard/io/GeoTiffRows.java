@@ -12,6 +12,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.Map;
+import java.util.stream.IntStream;
 import javax.imageio.ImageReadParam;
 import javax.imageio.ImageReader;
 import javax.imageio.ImageIO;
@@ -73,40 +74,37 @@ final class GeoTiffRows implements GridRows {
         if (!Files.isRegularFile(file)) {
             return null;
         }
-        ImageReader reader = null;
-        try (ImageInputStream in = ImageIO.createImageInputStream(file.toFile())) {
-            reader = new it.geosolutions.imageioimpl.plugins.tiff.TIFFImageReaderSpi().createReaderInstance();
-            reader.setInput(in);
-            // The TIFF directory itself, not GeoTools' key decoder: that one starts JAI's whole operator
-            // registry (a tenth of a second) through GeoTools' logging set-up.
-            TIFFDirectory dir = TIFFDirectory.createFromMetadata(reader.getImageMetadata(0));
-            Map<Integer, Integer> keys = shortGeoKeys(dir.getTIFFField(GEO_KEY_DIRECTORY));
-            TIFFField scale = dir.getTIFFField(MODEL_PIXEL_SCALE), tie = dir.getTIFFField(MODEL_TIEPOINT);
-            Integer projected = keys.get(PROJECTED_CRS_KEY);
-            if (!Integer.valueOf(1).equals(keys.get(MODEL_TYPE_KEY))
-                    || !(keys.get(RASTER_TYPE_KEY) == null || keys.get(RASTER_TYPE_KEY) == 1)
-                    || projected == null || projected < 1024 || projected >= 32767
-                    || !(keys.get(LINEAR_UNITS_KEY) == null || keys.get(LINEAR_UNITS_KEY) == 9001)
-                    || dir.getTIFFField(MODEL_TRANSFORMATION) != null
-                    || scale == null || scale.getCount() < 2 || tie == null || tie.getCount() != 6) {
-                return null;
-            }
-            double sx = scale.getAsDouble(0), sy = scale.getAsDouble(1);
-            // raster (i, j) -> model (x, y) = (X + (i - I) sx, Y - (j - J) sy), from the cell corner
-            var g2w = new java.awt.geom.AffineTransform(sx, 0, 0, -sy,
-                    tie.getAsDouble(3) - tie.getAsDouble(0) * sx, tie.getAsDouble(4) + tie.getAsDouble(1) * sy);
-            String code = "EPSG:" + projected;
-            GridGeometry g = GeoTiffGrids.geometryOf(g2w, reader.getWidth(0), reader.getHeight(0), code, file.toString());
-            Double nodata = noData(dir.getTIFFField(GDAL_NODATA));
-            GeoTiffGrids.declaredProjected(code);
-            return new GeoTiffRows(file, g, nodata);
-        } catch (IOException | RuntimeException e) {
+        try {
+            return withReader(file, reader -> plainHeader(file, reader));
+        } catch (IllegalArgumentException e) {
             return null; // the full reader reports what is wrong with the file
-        } finally {
-            if (reader != null) {
-                reader.dispose();
-            }
         }
+    }
+
+    private static GeoTiffRows plainHeader(Path file, ImageReader reader) throws IOException {
+        // The TIFF directory itself, not GeoTools' key decoder: that one starts JAI's whole operator
+        // registry (a tenth of a second) through GeoTools' logging set-up.
+        TIFFDirectory dir = TIFFDirectory.createFromMetadata(reader.getImageMetadata(0));
+        Map<Integer, Integer> keys = shortGeoKeys(dir.getTIFFField(GEO_KEY_DIRECTORY));
+        TIFFField scale = dir.getTIFFField(MODEL_PIXEL_SCALE), tie = dir.getTIFFField(MODEL_TIEPOINT);
+        Integer projected = keys.get(PROJECTED_CRS_KEY);
+        if (!Integer.valueOf(1).equals(keys.get(MODEL_TYPE_KEY))
+                || !(keys.get(RASTER_TYPE_KEY) == null || keys.get(RASTER_TYPE_KEY) == 1)
+                || projected == null || projected < 1024 || projected >= 32767
+                || !(keys.get(LINEAR_UNITS_KEY) == null || keys.get(LINEAR_UNITS_KEY) == 9001)
+                || dir.getTIFFField(MODEL_TRANSFORMATION) != null
+                || scale == null || scale.getCount() < 2 || tie == null || tie.getCount() != 6) {
+            return null;
+        }
+        double sx = scale.getAsDouble(0), sy = scale.getAsDouble(1);
+        // raster (i, j) -> model (x, y) = (X + (i - I) sx, Y - (j - J) sy), from the cell corner
+        var g2w = new java.awt.geom.AffineTransform(sx, 0, 0, -sy,
+                tie.getAsDouble(3) - tie.getAsDouble(0) * sx, tie.getAsDouble(4) + tie.getAsDouble(1) * sy);
+        String code = "EPSG:" + projected;
+        GridGeometry g = GeoTiffGrids.geometryOf(g2w, reader.getWidth(0), reader.getHeight(0), code, file.toString());
+        Double nodata = noData(dir.getTIFFField(GDAL_NODATA));
+        GeoTiffGrids.declaredProjected(code);
+        return new GeoTiffRows(file, g, nodata);
     }
 
     /** TIFF tags of GeoTIFF (OGC 19-008r4, section 7.1) and GDAL's nodata tag. */
@@ -166,38 +164,76 @@ final class GeoTiffRows implements GridRows {
             throw new IllegalArgumentException("a " + w + " x " + h + " grid does not fit " + dst.length
                     + " floats at row stride " + stride);
         }
-        if (!readFloatBand(dst, stride)) {
+        long valid;
+        if (isFloatBand()) {
+            // Two halves on two threads, each with its own stream: decoding is CPU work, not disk work.
+            int parts = (long) w * h >= (1 << 20) ? Math.max(1, Math.min(2, Runtime.getRuntime().availableProcessors())) : 1;
+            valid = IntStream.range(0, parts).parallel()
+                    .mapToLong(k -> readRows(dst, stride, (int) ((long) h * k / parts), (int) ((long) h * (k + 1) / parts)))
+                    .sum();
+        } else {
             GeoTiffGrids.read(file).copyRows(dst, stride);
-        }
-        int valid = 0;
-        for (int r = 0; r < h; r++) {
-            valid += GeoTiffGrids.blankNoData(dst, r * stride, r * stride + w, nodata);
+            valid = 0;
+            for (int r = 0; r < h; r++) {
+                valid += GeoTiffGrids.blankNoData(dst, r * stride, r * stride + w, nodata);
+            }
         }
         if (valid == 0) {
             throw GeoTiffGrids.allBlank(file.toString());
         }
     }
 
-    /** The direct path: false, having read nothing, unless image 0 is one float32 band of the header's size. */
-    private boolean readFloatBand(float[] dst, int stride) {
-        int w = geometry.columns(), h = geometry.rows();
+    /** Whether image 0 is one float32 band of the header's size, which {@link #readRows} decodes into place. */
+    private boolean isFloatBand() {
+        return withReader(reader -> {
+            SampleModel sm = reader.getRawImageType(0).getSampleModel();
+            return sm.getDataType() == DataBuffer.TYPE_FLOAT && sm.getNumBands() == 1
+                    && reader.getWidth(0) == geometry.columns() && reader.getHeight(0) == geometry.rows();
+        });
+    }
+
+    /**
+     * Decodes rows {@code r0} to {@code r1 - 1} of the float band straight into {@code dst} at row stride
+     * {@code stride} (the reader writes into a raster over the caller's array), then blanks nodata.
+     *
+     * @return the number of valid cells in those rows
+     */
+    private long readRows(float[] dst, int stride, int r0, int r1) {
+        int w = geometry.columns();
+        withReader(reader -> {
+            var raster = Raster.createWritableRaster(new PixelInterleavedSampleModel(DataBuffer.TYPE_FLOAT, w,
+                    geometry.rows(), 1, stride, new int[] {0}), new DataBufferFloat(dst, dst.length), null);
+            var cm = new ComponentColorModel(java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_GRAY),
+                    false, false, java.awt.Transparency.OPAQUE, DataBuffer.TYPE_FLOAT);
+            ImageReadParam param = reader.getDefaultReadParam();
+            param.setSourceRegion(new java.awt.Rectangle(0, r0, w, r1 - r0));
+            param.setDestinationOffset(new java.awt.Point(0, r0));
+            param.setDestination(new BufferedImage(cm, raster, false, null));
+            reader.read(0, param);
+            return null;
+        });
+        long valid = 0;
+        for (int r = r0; r < r1; r++) {
+            valid += GeoTiffGrids.blankNoData(dst, r * stride, r * stride + w, nodata);
+        }
+        return valid;
+    }
+
+    private interface ReaderWork<T> {
+        T run(ImageReader reader) throws IOException;
+    }
+
+    private <T> T withReader(ReaderWork<T> work) {
+        return withReader(file, work);
+    }
+
+    /** Runs {@code work} with a TIFF reader of its own on {@code file}; failures name the file. */
+    private static <T> T withReader(Path file, ReaderWork<T> work) {
         ImageReader reader = null;
         try (ImageInputStream in = ImageIO.createImageInputStream(file.toFile())) {
             reader = new it.geosolutions.imageioimpl.plugins.tiff.TIFFImageReaderSpi().createReaderInstance();
             reader.setInput(in);
-            SampleModel sm = reader.getRawImageType(0).getSampleModel();
-            if (sm.getDataType() != DataBuffer.TYPE_FLOAT || sm.getNumBands() != 1
-                    || reader.getWidth(0) != w || reader.getHeight(0) != h) {
-                return false;
-            }
-            var raster = Raster.createWritableRaster(new PixelInterleavedSampleModel(DataBuffer.TYPE_FLOAT, w, h, 1,
-                    stride, new int[] {0}), new DataBufferFloat(dst, dst.length), null);
-            var cm = new ComponentColorModel(java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_GRAY),
-                    false, false, java.awt.Transparency.OPAQUE, DataBuffer.TYPE_FLOAT);
-            ImageReadParam param = reader.getDefaultReadParam();
-            param.setDestination(new BufferedImage(cm, raster, false, null));
-            reader.read(0, param);
-            return true;
+            return work.run(reader);
         } catch (IOException | RuntimeException e) {
             throw new IllegalArgumentException(file + ": not a readable GeoTIFF (" + GeoTiffGrids.firstLine(e) + ")");
         } finally {

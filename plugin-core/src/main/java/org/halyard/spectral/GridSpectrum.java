@@ -147,31 +147,33 @@ public final class GridSpectrum {
 
     /** The blank mask of the {@code w x h} cells at row stride {@code stride}, or null when none is blank. */
     private static boolean[] blanks(float[] s, int w, int h, int stride) {
-        boolean[] blank = null;
-        int valid = 0;
+        long nBlank = IntStream.range(0, h).parallel().mapToLong(r -> {
+            int n = 0;
+            for (int c = 0, off = r * stride; c < w; c++) {
+                n += Float.isNaN(s[off + c]) ? 1 : 0;
+            }
+            return n;
+        }).sum();
+        if (nBlank == (long) w * h) {
+            throw new IllegalArgumentException("every cell of the grid is blank");
+        }
+        if (nBlank == 0) {
+            return null;
+        }
+        boolean[] blank = new boolean[w * h];
         for (int r = 0; r < h; r++) {
             for (int c = 0; c < w; c++) {
-                if (Float.isNaN(s[r * stride + c])) {
-                    if (blank == null) {
-                        blank = new boolean[w * h];
-                    }
-                    blank[r * w + c] = true;
-                } else {
-                    valid++;
-                }
+                blank[r * w + c] = Float.isNaN(s[r * stride + c]);
             }
-        }
-        if (valid == 0) {
-            throw new IllegalArgumentException("every cell of the grid is blank");
         }
         return blank;
     }
 
     /** Removes the plane from row {@code r}, which starts at {@code s[off]}; blank cells stay NaN. */
     private static void detrendRow(GridGeometry g, LinearTrend trend, float[] s, int r, int off) {
-        double y = g.y(r);
+        double v0 = trend.at(g.x(0), g.y(r)), dv = trend.bx() * g.cellSize();
         for (int c = 0, w = g.columns(); c < w; c++) {
-            s[off + c] -= (float) trend.at(g.x(c), y);
+            s[off + c] -= (float) (v0 + c * dv);
         }
     }
 
@@ -340,10 +342,9 @@ public final class GridSpectrum {
             int off = r * stride;
             dst[off + 1] = dst[off + nc]; // repack the Nyquist real part for JTransforms
             fft.realInverse(dst, off, true);
-            double y = geometry.y(r);
+            double v0 = t.at(geometry.x(0), geometry.y(r)), dv = t.bx() * geometry.cellSize();
             for (int c = 0; c < cols; c++) {
-                dst[off + c] = blank != null && blank[r * cols + c] ? Float.NaN
-                        : (float) (dst[off + c] + t.at(geometry.x(c), y));
+                dst[off + c] = blank != null && blank[r * cols + c] ? Float.NaN : (float) (dst[off + c] + (v0 + c * dv));
             }
             if (sink != null) {
                 sink.row(r, dst, off);

@@ -30,25 +30,35 @@ public record LinearTrend(double a, double bx, double by, double x0, double y0) 
      */
     public static LinearTrend fit(GridGeometry g, float[] v, int stride) {
         double x0 = (g.west() + g.east()) / 2, y0 = (g.north() + g.south()) / 2;
+        // Sums within each row (rows in parallel), then over rows in order: the same result on any core count.
+        double[] rowSums = new double[5 * g.rows()];
+        java.util.stream.IntStream.range(0, g.rows()).parallel().forEach(r -> {
+            double n = 0, sx = 0, sxx = 0, sv = 0, sxv = 0;
+            for (int c = 0, off = r * stride; c < g.columns(); c++) {
+                float z = v[off + c];
+                if (!Float.isNaN(z)) {
+                    double x = g.x(c) - x0;
+                    n++;
+                    sx += x;
+                    sxx += x * x;
+                    sv += z;
+                    sxv += x * z;
+                }
+            }
+            System.arraycopy(new double[] {n, sx, sxx, sv, sxv}, 0, rowSums, 5 * r, 5);
+        });
         double n = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0, sv = 0, sxv = 0, syv = 0;
         for (int r = 0; r < g.rows(); r++) {
-            double y = g.y(r) - y0;
-            for (int c = 0; c < g.columns(); c++) {
-                float z = v[r * stride + c];
-                if (Float.isNaN(z)) {
-                    continue;
-                }
-                double x = g.x(c) - x0;
-                n++;
-                sx += x;
-                sy += y;
-                sxx += x * x;
-                syy += y * y;
-                sxy += x * y;
-                sv += z;
-                sxv += x * z;
-                syv += y * z;
-            }
+            double y = g.y(r) - y0, nr = rowSums[5 * r], rx = rowSums[5 * r + 1], rv = rowSums[5 * r + 3];
+            n += nr;
+            sx += rx;
+            sy += nr * y;
+            sxx += rowSums[5 * r + 2];
+            syy += nr * y * y;
+            sxy += rx * y;
+            sv += rv;
+            sxv += rowSums[5 * r + 4];
+            syv += rv * y;
         }
         if (n == 0) {
             throw new IllegalArgumentException("every cell of the grid is blank");

@@ -62,6 +62,26 @@ class GeoTiffGridsTest {
     }
 
     @Test
+    void openReadsALargeGridInPartsIntoTheRightRows() throws IOException {
+        // above a million cells the rows are decoded in two parts on two threads
+        GridGeometry g = new GridGeometry(1100, 1001, 300000, 6200000, 0.5, "EPSG:32632");
+        float[] v = Grid.sample(g, (x, y) -> (x - 300000) * 0.01 + (y - 6199000) * 0.37).toArray();
+        v[g.index(5, 3)] = Float.NaN;
+        v[g.index(1000, 900)] = Float.NaN;
+        Path f = dir.resolve("big.tif");
+        GeoTiffGrids.write(Grid.of(g, v), f);
+        int stride = g.columns() + 6;
+        float[] dst = new float[g.rows() * stride];
+        GeoTiffGrids.open(f).copyRows(dst, stride);
+        for (int r = 0; r < g.rows(); r++) {
+            for (int c = 0; c < g.columns(); c++) {
+                assertThat(Float.valueOf(dst[r * stride + c])).as("row " + r + " column " + c)
+                        .isEqualTo(Float.valueOf(v[g.index(c, r)]));
+            }
+        }
+    }
+
+    @Test
     @Tag("external")
     void openReadsOtherSampleTypesThroughTheCoverage() throws IOException {
         ExternalTools.require("gdal_translate");
