@@ -40,8 +40,10 @@ import org.jtransforms.fft.FloatFFT_1D;
  * <p><b>Accuracy:</b> float arithmetic, about 1e-6 of the field's range from the transforms; edge effects
  * of the padding reach a few cells in; derivatives amplify noise as k^n.
  *
- * <p><b>Thread safety:</b> immutable once built; {@link #filter} may run from several threads. Each call
- * uses all cores through the common fork-join pool.
+ * <p><b>Thread safety:</b> {@link #filter}, {@link #filterToArray} and {@link #filterRows} only read the
+ * spectrum and may run from several threads; {@link #filterConsuming} takes the spectrum over and must be
+ * the last call, made when no other is running. Each call uses all cores through the common fork-join
+ * pool.
  */
 public final class GridSpectrum {
 
