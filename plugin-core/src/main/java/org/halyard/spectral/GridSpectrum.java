@@ -16,7 +16,7 @@ import org.jtransforms.fft.FloatFFT_1D;
  * <ol>
  *   <li>fit and remove a least-squares plane ({@link LinearTrend});</li>
  *   <li>fill blanks smoothly ({@link BlankFill});</li>
- *   <li>pad to at least {@code padFactor} times each side, to an even 2-3-5-7-smooth length
+ *   <li>pad to at least {@code padFactor} times each side, to an even 2-3-5-smooth length
  *       ({@link FftSizes}); the pad holds the grid mirrored about its edges, blended between the two edges
  *       it joins (the transform is periodic) and tapered to the mean by a squared cosine;</li>
  *   <li>real 2-D FFT: a real transform of each row (JTransforms {@code FloatFFT_1D}, one instance per
