@@ -105,16 +105,10 @@ public final class GridSpectrum {
         LinearTrend trend = LinearTrend.fit(g, s, stride);
         boolean[] blank = blanks(s, w, h, stride);
         if (blank != null) {
-            // Blanks are filled on a compact copy; the fill's workspace is needed only for such grids.
-            float[] filled = new float[w * h];
             for (int r = 0; r < h; r++) {
                 detrendRow(g, trend, s, r, r * stride);
-                System.arraycopy(s, r * stride, filled, r * w, w);
             }
-            BlankFill.fill(filled, w, h);
-            for (int r = 0; r < h; r++) {
-                System.arraycopy(filled, r * w, s, r * stride, w);
-            }
+            BlankFill.fill(s, w, h, stride, blank);
         }
         p.report(10);
         p.checkCanceled();
