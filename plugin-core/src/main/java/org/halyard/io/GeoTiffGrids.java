@@ -33,14 +33,18 @@ import org.halyard.grid.GridGeometry;
 import org.halyard.grid.GridRows;
 
 /**
- * Reads and writes {@link Grid}s as single-band float32 GeoTIFFs through GeoTools' gt-geotiff, and converts
- * between {@code Grid} and {@link GridCoverage2D}.
+ * Reads and writes {@link Grid}s as single-band float32 GeoTIFFs, and converts between {@code Grid} and
+ * {@link GridCoverage2D}. Reading goes through GeoTools' gt-geotiff ({@link #read}), or for the filter
+ * path straight into the caller's array ({@link #open}); writing is our own strip writer
+ * ({@link FloatGeoTiffWriter}).
  *
- * <p>Written files carry the CRS as EPSG geokeys, the exact pixel-is-area geotransform of the grid and a
- * nodata value ({@link #NODATA}, in GDAL's nodata tag) where the grid holds {@code NaN}. Read files must
- * have a projected CRS in metres and square cells; nodata cells become {@code NaN}.
+ * <p>Written files carry the CRS as its EPSG code in the GeoTIFF keys, the exact pixel-is-area
+ * geotransform of the grid and a nodata value ({@link #NODATA}, in GDAL's nodata tag) where the grid holds
+ * {@code NaN}. Read files must have a projected CRS in metres and square cells; nodata cells become
+ * {@code NaN}.
  *
- * <p><b>Thread safety:</b> stateless; calls may run concurrently on different files.
+ * <p><b>Thread safety:</b> calls may run concurrently on different files; the record of codes declared
+ * projected by files read ({@link #declaredProjected}) is a concurrent set.
  */
 public final class GeoTiffGrids {
 
