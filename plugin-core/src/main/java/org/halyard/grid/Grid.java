@@ -109,11 +109,8 @@ public final class Grid implements GridRows {
     /** Copies the rows at a row stride of the caller's choosing; see {@link GridRows}. */
     @Override
     public void copyRows(float[] dst, int stride) {
+        GridRows.requireFits(geometry, dst, stride);
         int w = geometry.columns(), h = geometry.rows();
-        if (stride < w || (long) (h - 1) * stride + w > dst.length) {
-            throw new IllegalArgumentException("a " + w + " x " + h + " grid does not fit " + dst.length
-                    + " floats at row stride " + stride);
-        }
         for (int r = 0; r < h; r++) {
             System.arraycopy(values, r * w, dst, r * stride, w);
         }

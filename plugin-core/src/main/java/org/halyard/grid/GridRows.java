@@ -20,4 +20,17 @@ public interface GridRows {
      * @throws IllegalStateException for a one-shot source asked a second time
      */
     void copyRows(float[] dst, int stride);
+
+    /**
+     * Checks that {@code dst} holds the grid of {@code g} at row stride {@code stride}.
+     *
+     * @throws IllegalArgumentException when it does not
+     */
+    static void requireFits(GridGeometry g, float[] dst, int stride) {
+        int w = g.columns(), h = g.rows();
+        if (stride < w || (long) (h - 1) * stride + w > dst.length) {
+            throw new IllegalArgumentException("a " + w + " x " + h + " grid does not fit " + dst.length
+                    + " floats at row stride " + stride);
+        }
+    }
 }

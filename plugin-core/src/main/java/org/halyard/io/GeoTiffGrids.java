@@ -257,15 +257,18 @@ public final class GeoTiffGrids {
         WritableRaster raster = Raster.createWritableRaster(new java.awt.image.PixelInterleavedSampleModel(
                 DataBuffer.TYPE_FLOAT, g.columns(), g.rows(), 1, g.columns(), new int[] {0}),
                 new java.awt.image.DataBufferFloat(v, v.length), null);
-        java.awt.image.ColorModel cm = new java.awt.image.ComponentColorModel(
-                java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_GRAY), false, false,
-                java.awt.Transparency.OPAQUE, DataBuffer.TYPE_FLOAT);
-        java.awt.image.BufferedImage image = new SharedRasterImage(cm, raster);
+        java.awt.image.BufferedImage image = new SharedRasterImage(floatGray(), raster);
         ReferencedEnvelope env = new ReferencedEnvelope(g.west(), g.east(), g.south(), g.north(), crs);
         Map<String, Object> props = new HashMap<>();
         CoverageUtilities.setNoDataProperty(props, new NoDataContainer(NODATA));
         GridCoverageFactory factory = new GridCoverageFactory();
         return factory.create(name, image, env, (GridSampleDimension[]) null, null, props);
+    }
+
+    /** The colour model of a one-band float image, as GeoTools' coverages and ImageIO expect. */
+    static java.awt.image.ColorModel floatGray() {
+        return new java.awt.image.ComponentColorModel(java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_GRAY),
+                false, false, java.awt.Transparency.OPAQUE, DataBuffer.TYPE_FLOAT);
     }
 
     /**

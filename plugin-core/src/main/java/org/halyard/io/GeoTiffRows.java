@@ -1,7 +1,6 @@
 package org.halyard.io;
 
 import java.awt.image.BufferedImage;
-import java.awt.image.ComponentColorModel;
 import java.awt.image.DataBuffer;
 import java.awt.image.DataBufferFloat;
 import java.awt.image.PixelInterleavedSampleModel;
@@ -159,11 +158,8 @@ final class GeoTiffRows implements GridRows {
             throw new IllegalStateException(file + ": the values were read already");
         }
         read = true;
+        GridRows.requireFits(geometry, dst, stride);
         int w = geometry.columns(), h = geometry.rows();
-        if (stride < w || (long) (h - 1) * stride + w > dst.length) {
-            throw new IllegalArgumentException("a " + w + " x " + h + " grid does not fit " + dst.length
-                    + " floats at row stride " + stride);
-        }
         long valid;
         if (isFloatBand()) {
             // Two halves on two threads, each with its own stream: decoding is CPU work, not disk work.
@@ -203,12 +199,10 @@ final class GeoTiffRows implements GridRows {
         withReader(reader -> {
             var raster = Raster.createWritableRaster(new PixelInterleavedSampleModel(DataBuffer.TYPE_FLOAT, w,
                     geometry.rows(), 1, stride, new int[] {0}), new DataBufferFloat(dst, dst.length), null);
-            var cm = new ComponentColorModel(java.awt.color.ColorSpace.getInstance(java.awt.color.ColorSpace.CS_GRAY),
-                    false, false, java.awt.Transparency.OPAQUE, DataBuffer.TYPE_FLOAT);
             ImageReadParam param = reader.getDefaultReadParam();
             param.setSourceRegion(new java.awt.Rectangle(0, r0, w, r1 - r0));
             param.setDestinationOffset(new java.awt.Point(0, r0));
-            param.setDestination(new BufferedImage(cm, raster, false, null));
+            param.setDestination(new BufferedImage(GeoTiffGrids.floatGray(), raster, false, null));
             reader.read(0, param);
             return null;
         });
