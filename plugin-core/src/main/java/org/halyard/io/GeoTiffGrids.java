@@ -86,7 +86,7 @@ public final class GeoTiffGrids {
     /**
      * Opens band 1 of a GeoTIFF for a single read of its values into an array the reader lays out, such as
      * a transform's padded rows: the header is read and checked now, the values when
-     * {@link GridRows#copyRows} is called. A single float32 band is read straight into place. In the common
+     * {@link GridRows#copyRows} is called. Band 1 of a float32 image is read straight into place. In the common
      * case of an EPSG-coded projected CRS the header is taken from the GeoTIFF keys without the EPSG
      * database, which a filtered grid written in the same CRS then does not need either.
      *

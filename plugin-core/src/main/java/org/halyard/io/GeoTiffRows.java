@@ -27,7 +27,7 @@ import org.halyard.grid.GridRows;
 /**
  * Band 1 of a GeoTIFF opened for one read of its values into an array laid out by the caller. The header
  * (CRS, geotransform, nodata) is read and checked when the file is opened; the values are read on
- * {@link #copyRows}, straight into the caller's rows when the file holds a single float32 band (the
+ * {@link #copyRows}, straight into the caller's rows when image 0 is float32 (band 1 of any number; the
  * TIFF reader decodes into the caller's array through a raster at the caller's row stride), else
  * through a coverage and a copy.
  *
@@ -179,11 +179,11 @@ final class GeoTiffRows implements GridRows {
         }
     }
 
-    /** Whether image 0 is one float32 band of the header's size, which {@link #readRows} decodes into place. */
+    /** Whether image 0 is float32 of the header's size, whose band 1 {@link #readRows} decodes into place. */
     private boolean isFloatBand() {
         return withReader(reader -> {
             SampleModel sm = reader.getRawImageType(0).getSampleModel();
-            return sm.getDataType() == DataBuffer.TYPE_FLOAT && sm.getNumBands() == 1
+            return sm.getDataType() == DataBuffer.TYPE_FLOAT
                     && reader.getWidth(0) == geometry.columns() && reader.getHeight(0) == geometry.rows();
         });
     }
@@ -201,6 +201,8 @@ final class GeoTiffRows implements GridRows {
                     geometry.rows(), 1, stride, new int[] {0}), new DataBufferFloat(dst, dst.length), null);
             ImageReadParam param = reader.getDefaultReadParam();
             param.setSourceRegion(new java.awt.Rectangle(0, r0, w, r1 - r0));
+            param.setSourceBands(new int[] {0}); // band 1 of however many
+            param.setDestinationBands(new int[] {0});
             param.setDestinationOffset(new java.awt.Point(0, r0));
             param.setDestination(new BufferedImage(GeoTiffGrids.floatGray(), raster, false, null));
             reader.read(0, param);

@@ -102,6 +102,36 @@ class GeoTiffGridsTest {
 
     @Test
     @Tag("external")
+    void openReadsBandOneOfAMultiBandFloatGrid() throws IOException {
+        ExternalTools.require("gdal_translate");
+        // two float32 bands in ENVI raw layout (band sequential, little-endian): band 1 = i, band 2 = 7
+        int w = 5, h = 3;
+        java.nio.ByteBuffer raw = java.nio.ByteBuffer.allocate(4 * 2 * w * h).order(java.nio.ByteOrder.LITTLE_ENDIAN);
+        for (int i = 0; i < w * h; i++) {
+            raw.putFloat(i);
+        }
+        for (int i = 0; i < w * h; i++) {
+            raw.putFloat(7);
+        }
+        Path bin = dir.resolve("two.f32");
+        Files.write(bin, raw.array());
+        Files.writeString(dir.resolve("two.hdr"), "ENVI\nsamples = 5\nlines = 3\nbands = 2\nheader offset = 0\n"
+                + "file type = ENVI Standard\ndata type = 4\ninterleave = bsq\nbyte order = 0\n"
+                + "map info = {UTM, 1, 1, 400000, 6000000, 2, 2, 31, North, WGS-84}\n");
+        for (String interleave : List.of("PIXEL", "BAND")) {
+            Path tif = dir.resolve("two-" + interleave + ".tif");
+            ExternalTools.run(List.of("gdal_translate", "-q", "-a_srs", "EPSG:32631", "-co", "INTERLEAVE=" + interleave,
+                    bin.toString(), tif.toString()), null).orFail();
+            float[] dst = new float[h * w];
+            GeoTiffGrids.open(tif).copyRows(dst, w);
+            for (int i = 0; i < w * h; i++) {
+                assertThat(dst[i]).as(interleave + " cell " + i).isEqualTo((float) i);
+            }
+        }
+    }
+
+    @Test
+    @Tag("external")
     void gdalSeesEpsgGeotransformAndNodataAsWritten() throws IOException {
         ExternalTools.require("gdalinfo");
         Path f = dir.resolve("b.tif");
