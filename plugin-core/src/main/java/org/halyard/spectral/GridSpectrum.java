@@ -305,24 +305,42 @@ public final class GridSpectrum {
         AtomicInteger done = new AtomicInteger();
         int ncols = nc / 2 + 1;
         int nblocks = blocks(ncols);
+        boolean radial = response.radial();
         parallel(nblocks, t -> new Columns(nr), (block, bi) -> {
             int k0 = bi * Columns.BLOCK, n = Math.min(Columns.BLOCK, ncols - k0);
             block.gather(src, stride, k0, n, rows);
             block.padRows(rowPad, rows, n);
-            double[] h = block.h;
+            double[] h = block.h, hq = block.hq;
             for (int j = 0; j < n; j++) {
                 int k = k0 + j;
                 double kx = k * dkx;
                 boolean nyqX = k == nc / 2;
                 float[] b = block.buf[j];
                 block.fft.complexForward(b);
+                if (radial) {
+                    // H(kx, ky) = H(kx, -ky): rows q and nr - q share one evaluation
+                    for (int q = 0; q <= nr / 2; q++) {
+                        responseAt(response, kx, -q * dky, nyqX, q == nr / 2, h, block.h2);
+                        hq[2 * q] = h[0];
+                        hq[2 * q + 1] = h[1];
+                    }
+                }
                 for (int q = 0; q < nr; q++) {
-                    int f = q <= nr / 2 ? q : q - nr;
-                    double ky = -f * dky; // row index runs south
-                    responseAt(response, kx, ky, nyqX, q == nr / 2, h, block.h2);
+                    double h0, h1;
+                    if (radial) {
+                        int m = q <= nr / 2 ? q : nr - q;
+                        h0 = hq[2 * m];
+                        h1 = hq[2 * m + 1];
+                    } else {
+                        int f = q <= nr / 2 ? q : q - nr;
+                        double ky = -f * dky; // row index runs south
+                        responseAt(response, kx, ky, nyqX, q == nr / 2, h, block.h2);
+                        h0 = h[0];
+                        h1 = h[1];
+                    }
                     float re = b[2 * q], im = b[2 * q + 1];
-                    b[2 * q] = (float) (re * h[0] - im * h[1]);
-                    b[2 * q + 1] = (float) (re * h[1] + im * h[0]);
+                    b[2 * q] = (float) (re * h0 - im * h1);
+                    b[2 * q + 1] = (float) (re * h1 + im * h0);
                 }
                 block.fft.complexInverse(b, true);
             }
@@ -371,10 +389,12 @@ public final class GridSpectrum {
         final float[][] buf;
         final double[] h = new double[2];
         final double[] h2 = new double[2];
+        final double[] hq;   // a radial response for rows 0 .. nr/2 of one column
 
         Columns(int nr) {
             fft = new FloatFFT_1D(nr);
             buf = new float[BLOCK][2 * nr];
+            hq = new double[2 * (nr / 2 + 1)];
         }
 
         void gather(float[] s, int stride, int k0, int n, int nrows) {

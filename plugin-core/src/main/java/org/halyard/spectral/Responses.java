@@ -193,6 +193,11 @@ public final class Responses {
             public LinearTrend onTrend(LinearTrend t) {
                 return trend.apply(t);
             }
+
+            @Override
+            public boolean radial() {
+                return true;
+            }
         };
     }
 

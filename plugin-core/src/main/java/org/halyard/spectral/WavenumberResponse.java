@@ -25,6 +25,14 @@ public interface WavenumberResponse {
      */
     LinearTrend onTrend(LinearTrend trend);
 
+    /**
+     * Whether the response depends on k alone (continuation, vertical derivatives), so that the engine may
+     * evaluate it once for each pair of wavenumbers {@code (kx, ky)} and {@code (kx, -ky)}.
+     */
+    default boolean radial() {
+        return false;
+    }
+
     /** The product of this response and {@code then}: this filter applied first. */
     default WavenumberResponse andThen(WavenumberResponse then) {
         WavenumberResponse first = this;
@@ -42,6 +50,11 @@ public interface WavenumberResponse {
             @Override
             public LinearTrend onTrend(LinearTrend trend) {
                 return then.onTrend(first.onTrend(trend));
+            }
+
+            @Override
+            public boolean radial() {
+                return first.radial() && then.radial();
             }
         };
     }
