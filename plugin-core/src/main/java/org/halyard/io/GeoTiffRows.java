@@ -163,7 +163,7 @@ final class GeoTiffRows implements GridRows {
         long valid;
         if (isFloatBand()) {
             // Two halves on two threads, each with its own stream: decoding is CPU work, not disk work.
-            int parts = (long) w * h >= (1 << 20) ? Math.max(1, Math.min(2, Runtime.getRuntime().availableProcessors())) : 1;
+            int parts = (long) w * h >= (1 << 20) ? Math.max(1, Math.min(Math.min(2, h), Runtime.getRuntime().availableProcessors())) : 1;
             valid = IntStream.range(0, parts).parallel()
                     .mapToLong(k -> readRows(dst, stride, (int) ((long) h * k / parts), (int) ((long) h * (k + 1) / parts)))
                     .sum();
