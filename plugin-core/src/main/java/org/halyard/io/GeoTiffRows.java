@@ -38,12 +38,14 @@ final class GeoTiffRows implements GridRows {
     private final Path file;
     private final GridGeometry geometry;
     private final Double nodata;
+    private final boolean floatBand;   // image 0 is float32 of the header's size: read into place
     private boolean read;
 
-    private GeoTiffRows(Path file, GridGeometry geometry, Double nodata) {
+    private GeoTiffRows(Path file, GridGeometry geometry, Double nodata, boolean floatBand) {
         this.file = file;
         this.geometry = geometry;
         this.nodata = nodata;
+        this.floatBand = floatBand;
     }
 
     /** Opens {@code file} and checks its header; see {@link GeoTiffGrids#open}. */
@@ -57,7 +59,13 @@ final class GeoTiffRows implements GridRows {
             var range = reader.getOriginalGridRange();
             GridGeometry g = GeoTiffGrids.geometryOf(reader.getCoordinateReferenceSystem(),
                     reader.getOriginalGridToWorld(PixelInCell.CELL_CORNER), range.getSpan(0), range.getSpan(1), file.toString());
-            return new GeoTiffRows(file, g, GeoTiffGrids.noData(reader));
+            boolean floatBand;
+            try {
+                floatBand = withReader(file, r -> isFloatBand(r, g));
+            } catch (IllegalArgumentException e) {
+                floatBand = false; // GeoTools reads what the plain TIFF reader cannot: take its coverage
+            }
+            return new GeoTiffRows(file, g, GeoTiffGrids.noData(reader), floatBand);
         } finally {
             reader.dispose();
         }
@@ -103,7 +111,7 @@ final class GeoTiffRows implements GridRows {
         GridGeometry g = GeoTiffGrids.geometryOf(g2w, reader.getWidth(0), reader.getHeight(0), code, file.toString());
         Double nodata = noData(dir.getTIFFField(GDAL_NODATA));
         GeoTiffGrids.declaredProjected(code);
-        return new GeoTiffRows(file, g, nodata);
+        return new GeoTiffRows(file, g, nodata, isFloatBand(reader, g));
     }
 
     /** TIFF tags of GeoTIFF (OGC 19-008r4, section 7.1) and GDAL's nodata tag. */
@@ -161,7 +169,7 @@ final class GeoTiffRows implements GridRows {
         GridRows.requireFits(geometry, dst, stride);
         int w = geometry.columns(), h = geometry.rows();
         long valid;
-        if (isFloatBand()) {
+        if (floatBand) {
             // Two halves on two threads, each with its own stream: decoding is CPU work, not disk work.
             int parts = (long) w * h >= (1 << 20) ? Math.max(1, Math.min(Math.min(2, h), Runtime.getRuntime().availableProcessors())) : 1;
             valid = IntStream.range(0, parts).parallel()
@@ -179,13 +187,10 @@ final class GeoTiffRows implements GridRows {
         }
     }
 
-    /** Whether image 0 is float32 of the header's size, whose band 1 {@link #readRows} decodes into place. */
-    private boolean isFloatBand() {
-        return withReader(reader -> {
-            SampleModel sm = reader.getRawImageType(0).getSampleModel();
-            return sm.getDataType() == DataBuffer.TYPE_FLOAT
-                    && reader.getWidth(0) == geometry.columns() && reader.getHeight(0) == geometry.rows();
-        });
+    /** Whether image 0 is float32 of the grid's size, whose band 1 {@link #readRows} decodes into place. */
+    private static boolean isFloatBand(ImageReader reader, GridGeometry g) throws IOException {
+        SampleModel sm = reader.getRawImageType(0).getSampleModel();
+        return sm.getDataType() == DataBuffer.TYPE_FLOAT && reader.getWidth(0) == g.columns() && reader.getHeight(0) == g.rows();
     }
 
     /**
