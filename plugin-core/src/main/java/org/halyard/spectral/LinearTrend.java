@@ -45,7 +45,11 @@ public record LinearTrend(double a, double bx, double by, double x0, double y0) 
                     sxv += x * z;
                 }
             }
-            System.arraycopy(new double[] {n, sx, sxx, sv, sxv}, 0, rowSums, 5 * r, 5);
+            rowSums[5 * r] = n;
+            rowSums[5 * r + 1] = sx;
+            rowSums[5 * r + 2] = sxx;
+            rowSums[5 * r + 3] = sv;
+            rowSums[5 * r + 4] = sxv;
         });
         double n = 0, sx = 0, sy = 0, sxx = 0, syy = 0, sxy = 0, sv = 0, sxv = 0, syv = 0;
         for (int r = 0; r < g.rows(); r++) {
